@@ -1,0 +1,17 @@
+import { startCluster, type Cluster } from './pg-cluster';
+import { appUrl, ensureDatabase } from './database';
+import { say } from './log';
+
+export const DEV_DATABASE = 'crankwise';
+
+/** DATABASE_URL wins; otherwise the private dev cluster under .data/dev-pg. */
+export async function devDatabaseUrl(): Promise<{ url: string; cluster?: Cluster }> {
+  if (process.env.DATABASE_URL) {
+    say('using DATABASE_URL from the environment');
+    return { url: process.env.DATABASE_URL };
+  }
+  const cluster = await startCluster('.data/dev-pg', { preferredPort: 54320, throwaway: false });
+  await ensureDatabase(cluster.adminUrl(), DEV_DATABASE);
+  say(`PostgreSQL is up on 127.0.0.1:${cluster.port} (data in .data/dev-pg)`);
+  return { url: appUrl(cluster.adminUrl(), DEV_DATABASE), cluster };
+}

@@ -1,0 +1,60 @@
+// `npm test`: its own PostgreSQL cluster, a migrated template database, then typecheck, lint and
+// every vitest suite. The cluster stops when the run ends, pass or fail.
+import { createSequelize } from '../server/db/sequelize';
+import { migrate } from '../server/db/umzug';
+import { appUrl, dropDatabase, ensureDatabase } from './lib/database';
+import { say } from './lib/log';
+import { startCluster, type Cluster } from './lib/pg-cluster';
+import { runInherit } from './lib/run';
+
+export const TEMPLATE_DATABASE = 'crankwise_template';
+
+let cluster: Cluster | undefined;
+let adminUrl: string;
+if (process.env.DATABASE_URL) {
+  // A user's own server: the URL must name a role that may create databases.
+  const u = new URL(process.env.DATABASE_URL);
+  u.pathname = '/postgres';
+  adminUrl = u.toString();
+  say('tests use the server named by DATABASE_URL');
+} else {
+  cluster = await startCluster('.data/test-pg', { preferredPort: 54330, throwaway: true });
+  adminUrl = cluster.adminUrl();
+  say(`test PostgreSQL is up on 127.0.0.1:${cluster.port}`);
+}
+
+let status: number;
+try {
+  await dropDatabase(adminUrl, TEMPLATE_DATABASE);
+  await ensureDatabase(adminUrl, TEMPLATE_DATABASE);
+  const sequelize = createSequelize(appUrl(adminUrl, TEMPLATE_DATABASE));
+  await migrate(sequelize);
+  await sequelize.close();
+
+  const env = { ...process.env, NODE_ENV: 'test', TEST_ADMIN_URL: adminUrl, TEST_TEMPLATE_DATABASE: TEMPLATE_DATABASE };
+  // `npm test -- --quick <vitest filters>` skips typecheck and lint while iterating on one suite.
+  const quick = process.argv.includes('--quick');
+  const vitestArgs = process.argv.slice(2).filter((a) => a !== '--quick');
+  const steps: [string, string, string[]][] = [
+    ...(quick
+      ? []
+      : ([
+          ['typecheck', 'node_modules/.bin/tsc', ['--noEmit', '-p', 'tsconfig.json']],
+          ['lint', 'node_modules/.bin/eslint', ['-c', 'scripts/eslint.config.js', '--max-warnings=0', '.']],
+        ] as [string, string, string[]][])),
+    ['unit, component and API tests', 'node_modules/.bin/vitest', ['run', ...vitestArgs]],
+  ];
+  status = 0;
+  for (const [name, cmd, args] of steps) {
+    say(`${name} ...`);
+    const code = await runInherit(cmd, args, { env });
+    if (code !== 0) {
+      say(`${name} failed (exit ${code})`);
+      status = code;
+      break;
+    }
+  }
+} finally {
+  cluster?.stop();
+}
+process.exit(status);

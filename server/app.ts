@@ -1,0 +1,95 @@
+import { randomUUID } from 'node:crypto';
+import fs from 'node:fs';
+import path from 'node:path';
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import pg from 'pg';
+import { pinoHttp } from 'pino-http';
+import type { Sequelize } from 'sequelize';
+import { configurePassport } from './auth/passport';
+import { createSessionMiddleware } from './auth/session';
+import type { Env } from './config/env';
+import { initModels } from './db/models';
+import { errorHandler, unknownRoute } from './lib/errors';
+import { logger } from './lib/logger';
+import { customerRoutes } from './modules/customers/customers.routes';
+import { healthRoutes } from './modules/health/health.routes';
+import { pressRoutes } from './modules/presses/presses.routes';
+import { sessionRoutes } from './modules/session/session.routes';
+import { siteRoutes } from './modules/sites/sites.routes';
+
+export interface AppDeps {
+  env: Env;
+  sequelize: Sequelize;
+}
+
+export interface CrankwiseApp {
+  app: Express;
+  /** Closes the session store's pool; the caller owns the Sequelize instance. */
+  close: () => Promise<void>;
+}
+
+export function createApp({ env, sequelize }: AppDeps): CrankwiseApp {
+  initModels(sequelize);
+  const sessionPool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 5 });
+  const passport = configurePassport();
+  const app = express();
+
+  app.disable('x-powered-by');
+  app.set('trust proxy', env.TRUST_PROXY);
+  const secure = env.COOKIE_SECURE ?? env.NODE_ENV === 'production';
+  // HSTS and upgrade-insecure-requests only make sense behind HTTPS; on plain http they break a LAN tablet.
+  app.use(
+    helmet({
+      strictTransportSecurity: secure,
+      contentSecurityPolicy: { directives: { upgradeInsecureRequests: secure ? [] : null } },
+    }),
+  );
+  app.use(
+    pinoHttp({
+      logger,
+      genReqId: (req, res) => {
+        const id = randomUUID();
+        res.setHeader('X-Request-Id', id);
+        return id;
+      },
+      autoLogging: { ignore: (req) => req.url === '/api/health' },
+      serializers: {
+        req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
+        res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
+      },
+    }),
+  );
+  app.use(express.json({ limit: '1mb' }));
+  app.use(createSessionMiddleware({ pool: sessionPool, secret: env.SESSION_SECRET, secureCookie: secure }));
+  app.use(passport.initialize());
+  app.use(passport.session());
+
+  const api = express.Router();
+  api.use('/health', healthRoutes(sequelize));
+  api.use('/session', sessionRoutes({ signInLimit: env.SIGNIN_RATE_LIMIT, signInWindowMs: env.SIGNIN_RATE_WINDOW_MS }));
+  api.use('/customers', customerRoutes());
+  api.use('/sites', siteRoutes());
+  api.use('/presses', pressRoutes());
+  api.use(unknownRoute);
+  app.use('/api', api);
+
+  serveClient(app, env.CLIENT_DIST);
+  app.use(errorHandler);
+
+  return { app, close: () => sessionPool.end() };
+}
+
+/** Serves the built client and lets React Router handle every other GET path. */
+function serveClient(app: Express, dist: string | undefined): void {
+  if (!dist) return;
+  const index = path.join(dist, 'index.html');
+  if (!fs.existsSync(index)) {
+    logger.warn({ dist }, 'client build not found; only the API is served');
+    return;
+  }
+  app.use(express.static(dist, { index: false, maxAge: '1h' }));
+  app.get(/^\/(?!api\/).*/, (_req, res) => {
+    res.sendFile(index);
+  });
+}

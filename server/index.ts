@@ -1,0 +1,33 @@
+import { createApp } from './app';
+import { loadEnv } from './config/env';
+import { createSequelize } from './db/sequelize';
+import { migrate } from './db/umzug';
+import { logger } from './lib/logger';
+
+process.on('unhandledRejection', (reason) => {
+  logger.error({ err: reason }, 'unhandled promise rejection');
+});
+process.on('uncaughtException', (err) => {
+  logger.fatal({ err }, 'uncaught exception; stopping');
+  process.exit(1);
+});
+
+const env = loadEnv();
+const sequelize = createSequelize(env.DATABASE_URL);
+const applied = await migrate(sequelize);
+if (applied.length) logger.info({ applied }, 'migrations applied');
+
+const { app, close } = createApp({ env, sequelize });
+const server = app.listen(env.PORT, env.HOST, () => {
+  logger.info(`Crankwise listening on http://${env.HOST}:${env.PORT}`);
+});
+
+async function shutdown(signal: string) {
+  logger.info({ signal }, 'shutting down');
+  server.close();
+  await close();
+  await sequelize.close();
+  process.exit(0);
+}
+process.on('SIGINT', () => void shutdown('SIGINT'));
+process.on('SIGTERM', () => void shutdown('SIGTERM'));

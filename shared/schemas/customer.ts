@@ -1,0 +1,36 @@
+import { z } from 'zod';
+import { pageQuerySchema } from './common';
+
+const optionalText = (max: number) =>
+  z.string().trim().max(max).optional().transform((v) => (v === '' ? undefined : v));
+
+export const customerInputSchema = z.object({
+  name: z.string().trim().min(2, 'Enter the customer name (2 characters or more)').max(120),
+  contactName: optionalText(120),
+  contactEmail: z
+    .string()
+    .trim()
+    .toLowerCase()
+    .email('Enter a valid e-mail address, like name@plant.com')
+    .max(200)
+    .optional()
+    .or(z.literal('').transform(() => undefined)),
+  contactPhone: optionalText(40),
+  notes: optionalText(2000),
+});
+export type CustomerInput = z.infer<typeof customerInputSchema>;
+export const customerUpdateSchema = customerInputSchema.partial();
+export type CustomerUpdate = z.infer<typeof customerUpdateSchema>;
+
+export const customerListQuerySchema = pageQuerySchema;
+
+export interface Customer {
+  id: number;
+  name: string;
+  contactName: string | null;
+  contactEmail: string | null;
+  contactPhone: string | null;
+  notes: string | null;
+  createdAt: string;
+  updatedAt: string;
+}

@@ -1,0 +1,34 @@
+import type { Express } from 'express';
+import supertest from 'supertest';
+import { afterAll, beforeAll } from 'vitest';
+import { createApp } from '../server/app';
+import { loadEnv } from '../server/config/env';
+import { TEST_PASSWORD } from './factories';
+import type { TestDatabase } from './setup/database';
+
+/** An app bound to the file's own test database. */
+export function useApiApp(db: TestDatabase, envOverrides: Record<string, string> = {}): { app: () => Express } {
+  let app: Express | undefined;
+  let close: (() => Promise<void>) | undefined;
+  beforeAll(() => {
+    const env = loadEnv({ NODE_ENV: 'test', DATABASE_URL: db.url, SESSION_SECRET: 'test-secret-that-is-long-enough', LOG_LEVEL: 'silent', ...envOverrides });
+    ({ app, close } = createApp({ env, sequelize: db.sequelize }));
+  });
+  afterAll(async () => {
+    await close?.();
+  });
+  return {
+    app: () => {
+      if (!app) throw new Error('app not ready');
+      return app;
+    },
+  };
+}
+
+/** A supertest agent (keeps cookies) signed in as the given user. */
+export async function signedInAgent(app: Express, email: string) {
+  const agent = supertest.agent(app);
+  const res = await agent.post('/api/session').send({ email, password: TEST_PASSWORD });
+  if (res.status !== 200) throw new Error(`sign-in failed for ${email}: ${res.status} ${JSON.stringify(res.body)}`);
+  return agent;
+}

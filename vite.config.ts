@@ -1,0 +1,48 @@
+import { fileURLToPath } from 'node:url';
+import react from '@vitejs/plugin-react';
+import { defineConfig } from 'vitest/config';
+
+const alias = {
+  '@shared': fileURLToPath(new URL('./shared', import.meta.url)),
+  '@': fileURLToPath(new URL('./src', import.meta.url)),
+};
+
+const apiPort = process.env.PORT ?? '3000';
+
+export default defineConfig({
+  plugins: [react()],
+  resolve: { alias },
+  build: { outDir: 'dist/client', emptyOutDir: true, sourcemap: true },
+  server: {
+    port: 5173,
+    host: '127.0.0.1',
+    proxy: { '/api': `http://127.0.0.1:${apiPort}` },
+  },
+  test: {
+    globals: true,
+    // The API suites share one PostgreSQL database per worker; keep workers few on 2-core machines.
+    maxWorkers: 2,
+    projects: [
+      {
+        extends: true,
+        test: {
+          name: 'node',
+          environment: 'node',
+          include: ['shared/**/*.test.ts', 'server/**/*.test.ts', 'tests/api/**/*.test.ts'],
+          setupFiles: ['tests/setup/node.ts'],
+          testTimeout: 20_000,
+          hookTimeout: 60_000,
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'web',
+          environment: 'jsdom',
+          include: ['src/**/*.test.{ts,tsx}'],
+          setupFiles: ['tests/setup/web.ts'],
+        },
+      },
+    ],
+  },
+});
