@@ -1,0 +1,108 @@
+import fc from 'fast-check';
+import { unit } from 'mathjs';
+import { formatSi } from './format-quantity';
+import { parseEntry, type ParsedEntry } from './parse-entry';
+
+const valueOf = (p: ParsedEntry) => (p.ok && p.kind === 'value' ? p.value : Number.NaN);
+
+describe('parseEntry', () => {
+  it.each([
+    ['89', 89],
+    ['89.3 Ω', 89.3],
+    ['89.3Ω', 89.3],
+    ['89.3 \u2126', 89.3], // the ohm sign U+2126, as some keyboards produce
+    ['89.3ohm', 89.3],
+    ['89.3 Ohms', 89.3],
+    ['0.0893k', 89.3],
+    ['0.0893 kΩ', 89.3],
+    ['0.0893 kohm', 89.3],
+    ['1.2 MΩ', 1.2e6],
+    ['.5', 0.5],
+    ['  70  ', 70],
+  ])('reads the resistance %s as %f Ω', (entered, expected) => {
+    expect(valueOf(parseEntry(entered, 'resistance'))).toBeCloseTo(expected, 9);
+  });
+
+  it.each([
+    ['4.2 V', 4.2],
+    ['4.2V', 4.2],
+    ['4200 mV', 4.2],
+    ['4.2 VAC', 4.2],
+    ['4.2 V~', 4.2],
+    ['2.25', 2.25],
+  ])('reads the AC voltage %s as %f V', (entered, expected) => {
+    expect(valueOf(parseEntry(entered, 'ac_voltage'))).toBeCloseTo(expected, 9);
+  });
+
+  it.each(['OL', 'O.L', 'ol', 'O.L.', 'o.l', '0L'])('reads the meter display %s as over range', (entered) => {
+    expect(parseEntry(entered, 'resistance')).toEqual({ ok: true, kind: 'over_range' });
+  });
+
+  it('agrees with mathjs on SI prefixes (independent units library)', () => {
+    const cases: Array<[string, string]> = [
+      ['0.0893 kΩ', '0.0893 kohm'],
+      ['1.2 MΩ', '1.2 Mohm'],
+      ['470 mΩ', '470 mohm'],
+    ];
+    for (const [ours, theirs] of cases) {
+      expect(valueOf(parseEntry(ours, 'resistance'))).toBeCloseTo(unit(theirs).toNumber('ohm'), 9);
+    }
+    expect(valueOf(parseEntry('4200 mV', 'ac_voltage'))).toBeCloseTo(unit('4200 mV').toNumber('V'), 12);
+  });
+
+  it('refuses a decimal comma with a message that says what to type', () => {
+    const result = parseEntry('4,2', 'ac_voltage');
+    expect(result).toEqual({ ok: false, error: expect.stringContaining('type 4.2, not 4,2') });
+  });
+
+  it('refuses a voltage typed into a resistance field, and the reverse', () => {
+    expect(parseEntry('4.2 V', 'resistance')).toEqual({ ok: false, error: expect.stringContaining('That is a voltage') });
+    expect(parseEntry('4200 mV', 'resistance')).toEqual({ ok: false, error: expect.stringContaining('That is a voltage') });
+    expect(parseEntry('89 Ω', 'ac_voltage')).toEqual({ ok: false, error: expect.stringContaining('That is a resistance') });
+  });
+
+  it('tells the technician to switch the meter to AC when DC volts are typed', () => {
+    expect(parseEntry('4.2 VDC', 'ac_voltage')).toEqual({ ok: false, error: expect.stringContaining('set the meter to AC volts') });
+  });
+
+  it.each(['', 'abc', '89 Ωx', '8 9', 'kΩ', '-5', '1e999'])('gives an actionable error for %j', (entered) => {
+    const result = parseEntry(entered, 'resistance');
+    expect(result.ok).toBe(false);
+    if (!result.ok) expect(result.error).toMatch(/Type|type|negative|large|empty/);
+  });
+
+  it('names the accepted units in the resistance field error', () => {
+    expect(parseEntry('abc', 'resistance')).toEqual({
+      ok: false,
+      error: 'Type a number such as 89.3, optionally with a unit (Ω, kΩ, MΩ), or OL when the meter shows OL.',
+    });
+  });
+
+  it('round-trips any formatted resistance to within the four figures shown (property)', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 1e-3, max: 5e7, noNaN: true }), (value) => {
+        const back = valueOf(parseEntry(formatSi(value, 'resistance'), 'resistance'));
+        expect(Math.abs(back - value) / value).toBeLessThanOrEqual(5e-4);
+      }),
+    );
+  });
+
+  it('round-trips any formatted voltage to within the four figures shown (property)', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 1e-3, max: 1000, noNaN: true }), (value) => {
+        const back = valueOf(parseEntry(formatSi(value, 'ac_voltage'), 'ac_voltage'));
+        expect(Math.abs(back - value) / value).toBeLessThanOrEqual(5e-4);
+      }),
+    );
+  });
+
+  it('parses plain decimal text exactly as Number does (property)', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 0, max: 1e9, noNaN: true, noDefaultInfinity: true }), (value) => {
+        const text = value.toString();
+        fc.pre(!text.includes('e'));
+        expect(valueOf(parseEntry(text, 'resistance'))).toBe(Number(text));
+      }),
+    );
+  });
+});

@@ -1,0 +1,61 @@
+import { z } from 'zod';
+
+const positive = z.number().positive().finite();
+const percent = z.number().positive().max(100);
+
+/** Reference values for one winding (ohms at the band's reference temperature). */
+export const windingBandSchema = z
+  .object({
+    nominal: positive,
+    inBandPercent: percent,
+    nearEdgePercent: percent,
+    shortBelow: z.number().nonnegative(),
+    openAbove: positive,
+  })
+  .superRefine((band, ctx) => {
+    if (band.nearEdgePercent <= band.inBandPercent) {
+      ctx.addIssue({ code: 'custom', message: 'near-edge tolerance must be wider than the in-band tolerance', path: ['nearEdgePercent'] });
+    }
+    if (band.shortBelow >= band.nominal * (1 - band.nearEdgePercent / 100)) {
+      ctx.addIssue({ code: 'custom', message: 'short threshold must lie below the near-edge band', path: ['shortBelow'] });
+    }
+    if (band.openAbove <= band.nominal * (1 + band.nearEdgePercent / 100)) {
+      ctx.addIssue({ code: 'custom', message: 'open threshold must lie above the near-edge band', path: ['openAbove'] });
+    }
+  });
+export type WindingBand = z.infer<typeof windingBandSchema>;
+
+/** An AC-voltage range in volts RMS; the near-edge margin widens it on both sides. */
+export const voltageRangeSchema = z
+  .object({ min: positive, max: positive, nearEdgePercent: percent })
+  .refine((r) => r.max > r.min, { message: 'max must be above min', path: ['max'] });
+export type VoltageRange = z.infer<typeof voltageRangeSchema>;
+
+/** The JSON stored in band_sets.values. */
+export const bandSetValuesSchema = z.object({
+  label: z.string().min(1).max(120),
+  referenceTemperatureC: z.number().min(-40).max(150),
+  windings: z.object({
+    rotor: windingBandSchema,
+    stator_1: windingBandSchema,
+    stator_2: windingBandSchema,
+  }),
+  statorBalancePercent: percent,
+  excitation: voltageRangeSchema,
+  statorOutputMagnitude: voltageRangeSchema,
+  invented: z.boolean(),
+  note: z.string().max(500),
+});
+export type BandSetValues = z.infer<typeof bandSetValuesSchema>;
+
+export const generationKeySchema = z
+  .string()
+  .regex(/^[a-z0-9][a-z0-9-]{0,62}$/, 'use lower-case letters, digits and hyphens');
+
+/** A row of band_sets: one version of the values for one sensor generation. */
+export const bandSetSchema = z.object({
+  generationKey: generationKeySchema,
+  version: z.number().int().positive(),
+  values: bandSetValuesSchema,
+});
+export type BandSet = z.infer<typeof bandSetSchema>;

@@ -1,0 +1,154 @@
+import { z } from 'zod';
+import { causeCategorySchema, circuitSchema, positionSchema, quantitySchema } from './reading';
+
+export const STEP_KINDS = ['safety_gate', 'check', 'choice', 'measure', 'firmware', 'inspect', 'finding'] as const;
+export type StepKind = (typeof STEP_KINDS)[number];
+
+/** ANSI Z535 signal words, most severe first. */
+export const SIGNAL_WORDS = ['DANGER', 'WARNING', 'CAUTION'] as const;
+
+/**
+ * What a safety gate establishes. lockout leaves the circuits de-energized and locked;
+ * live_work means the precautions for energized work are in place.
+ */
+export const SAFETY_GATES = ['press_at_rest', 'die_area', 'lockout', 'live_work'] as const;
+
+/** Outcomes each kind must offer; measure and firmware outcomes are computed by the engine. */
+export const REQUIRED_OUTCOMES = {
+  safety_gate: ['confirmed'],
+  check: ['yes', 'no'],
+  firmware: ['compatible', 'incompatible', 'unknown'],
+  measure_resistance: ['pass', 'imbalance', 'low', 'high'],
+  measure_ac_voltage: ['pass', 'low', 'high'],
+} as const;
+
+const slug = z.string().regex(/^[a-z0-9][a-z0-9_-]{0,62}$/, 'use lower-case letters, digits, - and _');
+const text = (max: number) => z.string().trim().min(1).max(max);
+
+export const safetyMessageSchema = z.object({
+  signalWord: z.enum(SIGNAL_WORDS),
+  text: text(1200),
+});
+export type SafetyMessage = z.infer<typeof safetyMessageSchema>;
+
+/** What choosing an outcome says about the likely cause: positive points to it, negative rules it out. */
+export const causeEvidenceSchema = z.object({
+  cause: causeCategorySchema,
+  weight: z.number().int().min(-3).max(3),
+  because: text(300),
+});
+export type CauseEvidence = z.infer<typeof causeEvidenceSchema>;
+
+export const outcomeSchema = z.object({
+  value: slug,
+  label: text(160),
+  next: slug,
+  evidence: z.array(causeEvidenceSchema).max(7).optional(),
+});
+export type Outcome = z.infer<typeof outcomeSchema>;
+
+export const stepInputSchema = z.object({
+  key: slug,
+  label: text(160),
+  type: z.enum(['text', 'sensor_generation', 'version', 'photo']),
+  required: z.boolean(),
+});
+export type StepInput = z.infer<typeof stepInputSchema>;
+
+/** Which band of the visit's band set a reading is judged against. */
+export const bandRefSchema = z.discriminatedUnion('kind', [
+  z.object({ kind: z.literal('winding'), circuit: circuitSchema }),
+  z.object({ kind: z.literal('excitation') }),
+  z.object({ kind: z.literal('stator_output') }),
+]);
+export type BandRef = z.infer<typeof bandRefSchema>;
+
+export const readingSpecSchema = z.object({
+  key: slug,
+  label: text(160),
+  quantity: quantitySchema,
+  circuit: circuitSchema,
+  position: positionSchema,
+  // Optional here so the validator can name the step that lacks it.
+  band: bandRefSchema.optional(),
+});
+export type ReadingSpec = z.infer<typeof readingSpecSchema>;
+
+const stepBase = {
+  id: slug,
+  title: text(160),
+  instructions: text(4000),
+  safety: safetyMessageSchema.optional(),
+  inputs: z.array(stepInputSchema).max(20).optional(),
+};
+const outcomes = z.array(outcomeSchema).min(1).max(20);
+
+export const safetyGateStepSchema = z.object({
+  ...stepBase,
+  kind: z.literal('safety_gate'),
+  gate: z.enum(SAFETY_GATES),
+  confirmations: z.array(text(400)).min(1).max(20),
+  outcomes,
+});
+export const checkStepSchema = z.object({ ...stepBase, kind: z.literal('check'), outcomes });
+export const choiceStepSchema = z.object({ ...stepBase, kind: z.literal('choice'), outcomes });
+export const measureStepSchema = z.object({
+  ...stepBase,
+  kind: z.literal('measure'),
+  meterSetting: text(200),
+  readings: z.array(readingSpecSchema).min(1).max(12),
+  // When the visit has no sensor generation yet, suggest one from these readings.
+  suggestsGeneration: z.boolean().optional(),
+  outcomes,
+});
+export const firmwareStepSchema = z.object({ ...stepBase, kind: z.literal('firmware'), outcomes });
+export const inspectStepSchema = z.object({
+  ...stepBase,
+  kind: z.literal('inspect'),
+  photoPrompt: text(400),
+  outcomes,
+});
+export const findingStepSchema = z.object({
+  ...stepBase,
+  kind: z.literal('finding'),
+  cause: causeCategorySchema,
+  conclusion: text(1000),
+  recommendedAction: text(3000),
+  escalate: z.boolean(),
+});
+
+export const stepSchema = z.discriminatedUnion('kind', [
+  safetyGateStepSchema,
+  checkStepSchema,
+  choiceStepSchema,
+  measureStepSchema,
+  firmwareStepSchema,
+  inspectStepSchema,
+  findingStepSchema,
+]);
+export type Step = z.infer<typeof stepSchema>;
+export type SafetyGateStep = z.infer<typeof safetyGateStepSchema>;
+export type MeasureStep = z.infer<typeof measureStepSchema>;
+export type FindingStep = z.infer<typeof findingStepSchema>;
+export type BranchingStep = Exclude<Step, FindingStep>;
+
+/** The JSON stored in procedures.definition. */
+export const procedureDefinitionSchema = z.object({
+  formatVersion: z.literal(1),
+  start: slug,
+  steps: z.array(stepSchema).min(1).max(200),
+});
+export type ProcedureDefinition = z.infer<typeof procedureDefinitionSchema>;
+
+/** A row of procedures: one version of one procedure. */
+export const procedureSchema = z.object({
+  key: slug,
+  version: z.number().int().positive(),
+  title: text(160),
+  definition: procedureDefinitionSchema,
+});
+export type Procedure = z.infer<typeof procedureSchema>;
+
+/** What the technician answered at one step; measure and firmware outcomes come from the engine. */
+export const stepAnswerSchema = z.object({ stepId: slug, outcome: slug });
+export type StepAnswer = z.infer<typeof stepAnswerSchema>;
