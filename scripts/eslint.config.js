@@ -54,4 +54,9 @@ export default tseslint.config(
       'no-restricted-imports': restrict([{ group: ['@/features/*', '@/app/*', '**/features/*', '**/app/*', '**/server/**'], message: 'ui/ and lib/ sit below features and the app.' }]),
     },
   },
+  // A test renders its subject inside the real app providers, so tests may reach the app layer.
+  {
+    files: ['src/**/*.test.{ts,tsx}', 'src/testing/**/*.{ts,tsx}'],
+    rules: { 'no-restricted-imports': restrict([{ group: ['**/server/**'], message: 'The client does not import server code.' }]) },
+  },
 );

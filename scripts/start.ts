@@ -3,6 +3,7 @@ import { spawn } from 'node:child_process';
 import { DEMO_PASSWORD, DEMO_USERS } from '../server/db/seed/demo-data';
 import { createSequelize } from '../server/db/sequelize';
 import { seedDemo } from '../server/db/seed/seed-demo';
+import { seedReference } from '../server/db/seed/seed-reference';
 import { migrate } from '../server/db/umzug';
 import { devDatabaseUrl } from './lib/dev-database';
 import { fail, say } from './lib/log';
@@ -18,6 +19,7 @@ try {
   const sequelize = createSequelize(url);
   const applied = await migrate(sequelize);
   const { created } = await seedDemo(sequelize);
+  await seedReference(sequelize);
   await sequelize.close();
   say(`database ready (${applied.length} migrations applied, ${created} demo rows created)`);
 

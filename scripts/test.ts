@@ -1,6 +1,8 @@
 // `npm test`: its own PostgreSQL cluster, a migrated template database, then typecheck, lint and
 // every vitest suite. The cluster stops when the run ends, pass or fail.
+import fs from 'node:fs';
 import { createSequelize } from '../server/db/sequelize';
+import { seedReference } from '../server/db/seed/seed-reference';
 import { migrate } from '../server/db/umzug';
 import { appUrl, dropDatabase, ensureDatabase } from './lib/database';
 import { say } from './lib/log';
@@ -18,9 +20,23 @@ if (process.env.DATABASE_URL) {
   adminUrl = u.toString();
   say('tests use the server named by DATABASE_URL');
 } else {
-  cluster = await startCluster('.data/test-pg', { preferredPort: 54330, throwaway: true });
+  // A fresh cluster per run (about 2 s): concurrent runs and crashed runs never meet each other.
+  cluster = await startCluster(`.data/test-pg/run-${process.pid}`, { preferredPort: 54330, throwaway: true });
   adminUrl = cluster.adminUrl();
   say(`test PostgreSQL is up on 127.0.0.1:${cluster.port}`);
+}
+
+const cleanUp = () => {
+  if (!cluster) return;
+  cluster.stop();
+  fs.rmSync(cluster.dir, { recursive: true, force: true });
+  cluster = undefined;
+};
+for (const signal of ['SIGINT', 'SIGTERM'] as const) {
+  process.on(signal, () => {
+    cleanUp();
+    process.exit(130);
+  });
 }
 
 let status: number;
@@ -29,6 +45,8 @@ try {
   await ensureDatabase(adminUrl, TEMPLATE_DATABASE);
   const sequelize = createSequelize(appUrl(adminUrl, TEMPLATE_DATABASE));
   await migrate(sequelize);
+  // Reference data (procedure, invented demo bands and rules) is product data every suite may rely on.
+  await seedReference(sequelize);
   await sequelize.close();
 
   const env = { ...process.env, NODE_ENV: 'test', TEST_ADMIN_URL: adminUrl, TEST_TEMPLATE_DATABASE: TEMPLATE_DATABASE };
@@ -55,6 +73,6 @@ try {
     }
   }
 } finally {
-  cluster?.stop();
+  cleanUp();
 }
 process.exit(status);

@@ -12,11 +12,14 @@ import type { Env } from './config/env';
 import { initModels } from './db/models';
 import { errorHandler, unknownRoute } from './lib/errors';
 import { logger } from './lib/logger';
+import { attachmentRoutes } from './modules/attachments/attachments.routes';
+import { DiskStorage } from './modules/attachments/storage';
 import { customerRoutes } from './modules/customers/customers.routes';
 import { healthRoutes } from './modules/health/health.routes';
 import { pressRoutes } from './modules/presses/presses.routes';
 import { sessionRoutes } from './modules/session/session.routes';
 import { siteRoutes } from './modules/sites/sites.routes';
+import { visitRoutes } from './modules/visits/visits.routes';
 
 export interface AppDeps {
   env: Env;
@@ -71,6 +74,8 @@ export function createApp({ env, sequelize }: AppDeps): CrankwiseApp {
   api.use('/customers', customerRoutes());
   api.use('/sites', siteRoutes());
   api.use('/presses', pressRoutes());
+  api.use('/visits/:visitId/attachments', attachmentRoutes({ storage: new DiskStorage(path.resolve(env.UPLOAD_DIR)), maxUploadBytes: env.UPLOAD_MAX_BYTES }));
+  api.use('/visits', visitRoutes());
   api.use(unknownRoute);
   app.use('/api', api);
 

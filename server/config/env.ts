@@ -18,6 +18,10 @@ const envSchema = z.object({
   SIGNIN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
   SIGNIN_RATE_WINDOW_MS: z.coerce.number().int().min(1000).default(15 * 60 * 1000),
   CLIENT_DIST: z.string().optional(),
+  /** Folder that holds uploaded photos and signatures (relative to the working directory unless absolute). */
+  UPLOAD_DIR: z.string().min(1).default('.data/uploads'),
+  /** Largest single photo accepted, in bytes (15 MiB by default: a full-resolution tablet photo fits). */
+  UPLOAD_MAX_BYTES: z.coerce.number().int().min(1024).max(100 * 1024 * 1024).default(15 * 1024 * 1024),
 });
 
 export type Env = z.infer<typeof envSchema>;

@@ -1,8 +1,11 @@
 import type { Sequelize } from 'sequelize';
+import { Attachment, initAttachment } from '../modules/attachments/attachments.model';
 import { Customer, initCustomer } from '../modules/customers/customers.model';
+import { initReferenceModels } from '../modules/reference/reference.model';
 import { Press, initPress } from '../modules/presses/presses.model';
 import { Site, initSite } from '../modules/sites/sites.model';
 import { User, initUser } from '../modules/users/users.model';
+import { initVisitWorkModels } from '../modules/visits/visit-work.model';
 import { Visit, initVisit } from '../modules/visits/visits.model';
 
 let initialised: Sequelize | undefined;
@@ -15,6 +18,9 @@ export function initModels(sequelize: Sequelize): void {
   initSite(sequelize);
   initPress(sequelize);
   initVisit(sequelize);
+  initReferenceModels(sequelize);
+  initVisitWorkModels(sequelize);
+  initAttachment(sequelize);
 
   Customer.hasMany(Site, { as: 'sites', foreignKey: { name: 'customerId', allowNull: false } });
   Site.belongsTo(Customer, { as: 'customer', foreignKey: { name: 'customerId', allowNull: false } });
@@ -23,5 +29,8 @@ export function initModels(sequelize: Sequelize): void {
   Press.hasMany(Visit, { as: 'visits', foreignKey: { name: 'pressId', allowNull: false } });
   Visit.belongsTo(Press, { as: 'press', foreignKey: { name: 'pressId', allowNull: false } });
   Visit.belongsTo(User, { as: 'technician', foreignKey: { name: 'technicianId', allowNull: false } });
+  Visit.hasMany(Attachment, { as: 'attachments', foreignKey: { name: 'visitId', allowNull: false } });
+  Attachment.belongsTo(Visit, { as: 'visit', foreignKey: { name: 'visitId', allowNull: false } });
+  Attachment.belongsTo(User, { as: 'creator', foreignKey: { name: 'createdBy', allowNull: false } });
   initialised = sequelize;
 }

@@ -1,5 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
-import type { VisitStatus } from '../../../shared/schemas/visit';
+import type { CauseCategory } from '../../../shared/schemas/reading';
+import type { ReturnToService, VisitStatus } from '../../../shared/schemas/visit';
 import type { Press } from '../presses/presses.model';
 import type { User } from '../users/users.model';
 
@@ -11,6 +12,21 @@ export class Visit extends Model<InferAttributes<Visit>, InferCreationAttributes
   declare faultDisplayed: CreationOptional<string>;
   declare controlFirmwareFound: string | null;
   declare monitorFirmwareFound: string | null;
+  declare procedureId: number | null;
+  declare bandSetId: number | null;
+  declare firmwareRuleSetId: number | null;
+  declare controlFirmwareLeft: CreationOptional<string | null>;
+  declare monitorFirmwareLeft: CreationOptional<string | null>;
+  declare causeCategory: CreationOptional<CauseCategory | null>;
+  declare actionsTaken: CreationOptional<string | null>;
+  declare recommendations: CreationOptional<string | null>;
+  declare labourMinutes: CreationOptional<number | null>;
+  declare travelMinutes: CreationOptional<number | null>;
+  declare returnToService: CreationOptional<ReturnToService | null>;
+  declare contactName: CreationOptional<string | null>;
+  declare contactEmail: CreationOptional<string | null>;
+  declare signedAt: CreationOptional<Date | null>;
+  declare reviewComment: CreationOptional<string | null>;
   declare startedAt: Date | null;
   declare closedAt: Date | null;
   declare createdAt: CreationOptional<Date>;
@@ -18,6 +34,8 @@ export class Visit extends Model<InferAttributes<Visit>, InferCreationAttributes
   declare press?: NonAttribute<Press>;
   declare technician?: NonAttribute<User>;
 }
+
+const text = () => ({ type: DataTypes.TEXT, allowNull: true, defaultValue: null });
 
 export function initVisit(sequelize: Sequelize): void {
   Visit.init(
@@ -27,6 +45,21 @@ export function initVisit(sequelize: Sequelize): void {
       faultDisplayed: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
       controlFirmwareFound: { type: DataTypes.TEXT, allowNull: true, defaultValue: null },
       monitorFirmwareFound: { type: DataTypes.TEXT, allowNull: true, defaultValue: null },
+      procedureId: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
+      bandSetId: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
+      firmwareRuleSetId: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
+      controlFirmwareLeft: text(),
+      monitorFirmwareLeft: text(),
+      causeCategory: text(),
+      actionsTaken: text(),
+      recommendations: text(),
+      labourMinutes: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
+      travelMinutes: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
+      returnToService: { type: DataTypes.JSONB, allowNull: true, defaultValue: null },
+      contactName: text(),
+      contactEmail: text(),
+      signedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
+      reviewComment: text(),
       startedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
       closedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
       createdAt: DataTypes.DATE,

@@ -1,0 +1,62 @@
+import { pipeline } from 'node:stream';
+import { Router } from 'express';
+import { ANY_ROLE, requireRole } from '../../auth/require-role';
+import { logger } from '../../lib/logger';
+import { valid, validate } from '../../lib/validate';
+import { configureAttachments } from './attachments.service';
+import { attachmentListQuerySchema, attachmentParamsSchema, photoUploadFieldsSchema, visitParamsSchema } from './attachments.schema';
+import { photoUpload } from './photo-upload';
+import type { FileStorage } from './storage';
+
+export interface AttachmentRouteDeps {
+  storage: FileStorage;
+  /** UPLOAD_MAX_BYTES: the largest single photo. */
+  maxUploadBytes: number;
+}
+
+/**
+ * Mounted at /api/visits/:visitId/attachments; who may reach which visit is decided by visit-access.
+ * The storage given here is also the one storeSignature() writes to.
+ */
+export function attachmentRoutes({ storage, maxUploadBytes }: AttachmentRouteDeps): Router {
+  const attachments = configureAttachments({ storage, maxUploadBytes });
+  const router = Router({ mergeParams: true });
+  router.use(requireRole(...ANY_ROLE));
+
+  router.get('/', validate('params', visitParamsSchema), validate('query', attachmentListQuerySchema), async (req, res) => {
+    const items = await attachments.list(req.user!, valid(req, 'params', visitParamsSchema).visitId, valid(req, 'query', attachmentListQuerySchema));
+    res.json({ items });
+  });
+
+  router.post('/', validate('params', visitParamsSchema), photoUpload(maxUploadBytes), validate('body', photoUploadFieldsSchema), async (req, res) => {
+    const files = ((req.files as Express.Multer.File[] | undefined) ?? []).map((f) => ({ bytes: f.buffer, originalName: f.originalname }));
+    const { visitId } = valid(req, 'params', visitParamsSchema);
+    const result = await attachments.uploadPhotos(req.user!, visitId, files, valid(req, 'body', photoUploadFieldsSchema));
+    res.status(result.created ? 201 : 200).json({ items: result.items });
+  });
+
+  for (const variant of ['file', 'thumb'] as const) {
+    router.get(`/:id/${variant}`, validate('params', attachmentParamsSchema), async (req, res) => {
+      const { visitId, id } = valid(req, 'params', attachmentParamsSchema);
+      const file = await attachments.openFile(req.user!, visitId, id, variant);
+      res.set({
+        'Content-Type': file.mimeType,
+        'Content-Length': String(file.size),
+        'Content-Disposition': `inline; filename="${file.fileName}"`,
+        'Cache-Control': 'private, max-age=3600',
+        'X-Content-Type-Options': 'nosniff',
+      });
+      pipeline(file.body, res, (err) => {
+        if (err) logger.debug({ err, attachmentId: id }, 'attachment download ended early');
+      });
+    });
+  }
+
+  router.delete('/:id', validate('params', attachmentParamsSchema), async (req, res) => {
+    const { visitId, id } = valid(req, 'params', attachmentParamsSchema);
+    await attachments.remove(req.user!, visitId, id);
+    res.status(204).end();
+  });
+
+  return router;
+}

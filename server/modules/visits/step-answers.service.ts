@@ -1,0 +1,136 @@
+import type { Transaction } from 'sequelize';
+import { evaluateFirmware } from '../../../shared/domain/firmware-compatibility';
+import { judgeMeasurements } from '../../../shared/domain/judge-measurements';
+import type { Step } from '../../../shared/schemas/procedure';
+import type { SessionUser } from '../../../shared/schemas/session';
+import type { StepAnswerInput } from '../../../shared/schemas/visit';
+import { AppError } from '../../lib/errors';
+import { audit } from '../audit/audit';
+import { loadVisitForWrite } from './visit-access';
+import { bandValues, findStep, latestPublishedBandSet, loadVisitContext, type VisitContext } from './visit-context';
+import { missingReadings, stepReadings, toReadingInput, traverse } from './visit-state';
+import { StepResult } from './visit-work.model';
+import { rejudgeVisitReadings } from './readings.service';
+import { detailOf, visitIncludes } from './visits.service';
+import { Visit } from './visits.model';
+
+const invalid = (field: string, message: string) => new AppError(400, 'invalid_input', 'Some fields need attention.', { [field]: message });
+
+/** Only steps on the path taken, or the step waiting now, may be answered. */
+function assertReachable(ctx: VisitContext, stepId: string): void {
+  const t = traverse(ctx);
+  const reachable = t.path.some((p) => p.stepId === stepId) || t.current?.id === stepId;
+  if (!reachable) {
+    throw new AppError(409, 'step_not_reached', `Step "${stepId}" is not on the path this visit has taken yet. Answer the current step first.`);
+  }
+}
+
+async function pinGeneration(ctx: VisitContext, generation: string, transaction: Transaction): Promise<void> {
+  const bandSet = await latestPublishedBandSet(generation, transaction);
+  if (!bandSet) throw invalid('inputs.sensor_generation', `No published band set for generation "${generation}". Pick one from the list.`);
+  if (ctx.visit.bandSetId === bandSet.id) return;
+  await ctx.visit.update({ bandSetId: bandSet.id }, { transaction });
+  ctx.bandSet = bandSet;
+  await rejudgeVisitReadings(ctx, transaction);
+}
+
+/** Works out the outcome the server stands behind for one step, from the answer and the record. */
+async function decideOutcome(ctx: VisitContext, step: Step, input: StepAnswerInput, transaction: Transaction): Promise<{ outcome: string; confirmedAt: Date | null; detail: Record<string, unknown> }> {
+  const inputs = input.inputs ?? {};
+  for (const spec of step.inputs ?? []) {
+    if (spec.required && !inputs[spec.key]) throw invalid(`inputs.${spec.key}`, `${spec.label} is required.`);
+  }
+  if (inputs.sensor_generation) await pinGeneration(ctx, inputs.sensor_generation, transaction);
+
+  switch (step.kind) {
+    case 'finding':
+      throw new AppError(400, 'invalid_input', 'A finding is where the procedure ends; there is nothing to answer. Go on to close-out.');
+    case 'safety_gate':
+      if (input.confirmed !== true) {
+        throw invalid('confirmed', 'Confirm every point of this safety step before going on. It cannot be skipped.');
+      }
+      return { outcome: 'confirmed', confirmedAt: new Date(), detail: { confirmations: step.confirmations } };
+    case 'firmware': {
+      const pc = inputs.press_control_version;
+      const mm = inputs.monitor_module_version;
+      if (!pc || !mm) throw invalid('inputs', 'Type both firmware versions.');
+      const evaluation = evaluateFirmware(pc, mm, ctx.rules);
+      await ctx.visit.update(
+        { controlFirmwareFound: ctx.visit.controlFirmwareFound ?? pc, monitorFirmwareFound: ctx.visit.monitorFirmwareFound ?? mm },
+        { transaction },
+      );
+      return { outcome: evaluation.outcome, confirmedAt: null, detail: { reason: evaluation.reason, matchedRules: evaluation.matchedRules.map((r) => r.key) } };
+    }
+    case 'measure': {
+      const band = bandValues(ctx);
+      if (!band) {
+        throw new AppError(409, 'generation_unknown', 'Choose the sensor generation (or accept the suggested one) so the readings can be judged.');
+      }
+      const missing = missingReadings(ctx, step);
+      if (missing.length) throw new AppError(409, 'readings_missing', `Enter every reading of this step first. Missing: ${missing.join('; ')}.`);
+      const judged = judgeMeasurements(stepReadings(ctx, step.id).map(toReadingInput), band);
+      if (!judged.outcome) throw new AppError(409, 'readings_unreadable', `Some readings cannot be judged yet: ${judged.reason}`);
+      return { outcome: judged.outcome, confirmedAt: null, detail: { reason: judged.reason } };
+    }
+    default: {
+      const allowed = step.outcomes.map((o) => o.value);
+      if (!input.outcome || !allowed.includes(input.outcome)) {
+        throw invalid('outcome', `Choose one of: ${step.outcomes.map((o) => o.label).join(' / ')}.`);
+      }
+      return { outcome: input.outcome, confirmedAt: null, detail: {} };
+    }
+  }
+}
+
+/**
+ * Records an answer at one step. Idempotent on the client's UUID. A different answer to a step
+ * already answered supersedes the old one (kept as history), and the branching is re-run.
+ */
+export async function answerStep(user: SessionUser, visitId: number, stepId: string, input: StepAnswerInput) {
+  const existing = await StepResult.findByPk(input.id);
+  if (existing) {
+    if (existing.visitId !== visitId || existing.stepId !== stepId) throw new AppError(409, 'id_reused', 'That save id belongs to another answer. Reload the visit.');
+    const visit = await Visit.findByPk(visitId);
+    await loadVisitForWrite(user, visitId).catch((err: unknown) => {
+      // A retry after the visit closed still gets its answer back.
+      if (!(err instanceof AppError && err.status === 409)) throw err;
+    });
+    return detailOf(visit!);
+  }
+  const visit = await loadVisitForWrite(user, visitId);
+  return Visit.sequelize!.transaction(async (transaction) => {
+    await Visit.findByPk(visit.id, { transaction, lock: transaction.LOCK.UPDATE });
+    const ctx = await loadVisitContext(visit, transaction);
+    const step = findStep(ctx, stepId);
+    assertReachable(ctx, stepId);
+    const decided = await decideOutcome(ctx, step, input, transaction);
+    const previous = ctx.results.find((r) => r.stepId === stepId && r.supersededAt === null);
+    if (previous) {
+      await previous.update({ supersededAt: new Date(), supersededReason: `Answer changed by ${user.name}` }, { transaction });
+    }
+    await StepResult.create(
+      {
+        id: input.id,
+        visitId,
+        stepId,
+        outcome: decided.outcome,
+        answer: { ...(input.inputs ? { inputs: input.inputs } : {}), ...decided.detail },
+        note: input.note ?? null,
+        confirmedAt: decided.confirmedAt,
+        createdBy: user.id,
+      },
+      { transaction },
+    );
+    await audit(
+      {
+        visitId,
+        actorId: user.id,
+        action: step.kind === 'safety_gate' ? 'safety_gate_confirmed' : previous ? 'step_answer_changed' : 'step_answered',
+        detail: { stepId, outcome: decided.outcome, previousOutcome: previous?.outcome ?? null },
+      },
+      transaction,
+    );
+    const fresh = await Visit.findByPk(visitId, { include: visitIncludes, transaction });
+    return detailOf(fresh!, transaction);
+  });
+}

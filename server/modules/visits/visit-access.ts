@@ -1,0 +1,34 @@
+import type { SessionUser } from '../../../shared/schemas/session';
+import { AppError } from '../../lib/errors';
+import { Visit } from './visits.model';
+
+export const WRITABLE_STATUSES = ['draft', 'in_progress'] as const;
+
+export function visitReference(id: number): string {
+  return `V-${String(id).padStart(6, '0')}`;
+}
+
+/**
+ * A technician reaches only visits assigned to them; managers and admins reach every visit (DESIGN.md §2).
+ * Another technician's visit answers 404, so its existence is not revealed.
+ */
+export async function loadVisitForRead(user: SessionUser, visitId: number): Promise<Visit> {
+  const visit = await Visit.findByPk(visitId);
+  if (!visit || (user.role === 'technician' && visit.technicianId !== user.id)) {
+    throw new AppError(404, 'not_found', `Visit ${visitReference(visitId)} was not found, or it is assigned to another technician.`);
+  }
+  return visit;
+}
+
+/** As loadVisitForRead, and the visit must still be open for work (409 otherwise). */
+export async function loadVisitForWrite(user: SessionUser, visitId: number): Promise<Visit> {
+  const visit = await loadVisitForRead(user, visitId);
+  if (!(WRITABLE_STATUSES as readonly string[]).includes(visit.status)) {
+    const why =
+      visit.status === 'returned'
+        ? 'it was returned for correction: reopen it first.'
+        : `it is ${visit.status}. A closed visit is a record; a correction is made as an amendment by a manager.`;
+    throw new AppError(409, 'visit_not_open', `Visit ${visitReference(visit.id)} cannot be changed: ${why}`);
+  }
+  return visit;
+}

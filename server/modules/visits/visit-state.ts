@@ -1,0 +1,69 @@
+import { inferGeneration, type GenerationInference } from '../../../shared/domain/infer-generation';
+import { judgeMeasurements } from '../../../shared/domain/judge-measurements';
+import { evidenceFromPath, rankLikelyCauses, type CauseRanking } from '../../../shared/domain/likely-cause';
+import { evidenceFromReadings } from '../../../shared/domain/reading-evidence';
+import { traverseProcedure, type Traversal } from '../../../shared/domain/traverse-procedure';
+import type { MeasureStep } from '../../../shared/schemas/procedure';
+import type { Circuit, ReadingInput } from '../../../shared/schemas/reading';
+import type { Reading } from './visit-work.model';
+import { bandValues, currentReadings, currentResults, type VisitContext } from './visit-context';
+
+export function toReadingInput(r: Reading): ReadingInput {
+  return {
+    quantity: r.quantity,
+    circuit: r.circuit,
+    position: r.position,
+    entered: r.entry,
+    ...(r.windingTempC !== null ? { windingTemperatureC: r.windingTempC } : {}),
+    ...(r.cable ? { cable: r.cable } : {}),
+  };
+}
+
+export function stepReadings(ctx: VisitContext, stepId: string): Reading[] {
+  return currentReadings(ctx).filter((r) => r.stepId === stepId);
+}
+
+/** Which of a measure step's required readings have no current value yet. */
+export function missingReadings(ctx: VisitContext, step: MeasureStep): string[] {
+  const have = stepReadings(ctx, step.id);
+  return step.readings
+    .filter((spec) => !have.some((r) => r.quantity === spec.quantity && r.circuit === spec.circuit && r.position === spec.position))
+    .map((spec) => spec.label);
+}
+
+export function traverse(ctx: VisitContext): Traversal {
+  return traverseProcedure(
+    ctx.definition,
+    currentResults(ctx)
+      .filter((r) => r.outcome !== null)
+      .map((r) => ({ stepId: r.stepId, outcome: r.outcome! })),
+  );
+}
+
+/** Ranks causes from the outcomes on the path and from the judged readings. */
+export function likelyCauses(ctx: VisitContext, traversal: Traversal): CauseRanking {
+  const findingId = traversal.findings[0]?.id;
+  const evidence = evidenceFromPath(ctx.definition, traversal.path, findingId);
+  const band = bandValues(ctx);
+  if (band) {
+    const byStep = new Map<string, ReadingInput[]>();
+    for (const r of currentReadings(ctx)) byStep.set(r.stepId, [...(byStep.get(r.stepId) ?? []), toReadingInput(r)]);
+    const judged = [...byStep.values()].flatMap((inputs) => judgeMeasurements(inputs, band).results);
+    evidence.push(...evidenceFromReadings(judged));
+  }
+  return rankLikelyCauses(evidence);
+}
+
+/** When the nameplate gave no generation, suggest one from the de-energized readings so far. */
+export function generationSuggestion(ctx: VisitContext, candidates: { generationKey: string; values: NonNullable<ReturnType<typeof bandValues>> }[]): GenerationInference | null {
+  if (ctx.bandSet) return null;
+  const values: Partial<Record<Circuit, number>> = {};
+  for (const r of currentReadings(ctx)) {
+    if (r.quantity === 'resistance' && r.position === 'sensor_end' && r.valueSi !== null) values[r.circuit] = r.valueSi;
+  }
+  for (const r of currentReadings(ctx)) {
+    if (r.quantity === 'resistance' && values[r.circuit] === undefined && r.valueSi !== null) values[r.circuit] = r.valueSi;
+  }
+  if (Object.keys(values).length === 0) return null;
+  return inferGeneration(values, candidates);
+}
