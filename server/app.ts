@@ -85,16 +85,21 @@ export function createApp({ env, sequelize }: AppDeps): CrankwiseApp {
   return { app, close: () => sessionPool.end() };
 }
 
-/** Serves the built client and lets React Router handle every other GET path. */
-function serveClient(app: Express, dist: string | undefined): void {
-  if (!dist) return;
+/** Serves the built client and lets React Router handle every other page path. */
+function serveClient(app: Express, distSetting: string | undefined): void {
+  if (!distSetting) return;
+  const dist = path.resolve(distSetting);
   const index = path.join(dist, 'index.html');
   if (!fs.existsSync(index)) {
     logger.warn({ dist }, 'client build not found; only the API is served');
     return;
   }
+  // Hashed assets never change under their name; index.html must always be fetched fresh.
+  app.use('/assets', express.static(path.join(dist, 'assets'), { immutable: true, maxAge: '1y', fallthrough: false }));
   app.use(express.static(dist, { index: false, maxAge: '1h' }));
-  app.get(/^\/(?!api\/).*/, (_req, res) => {
+  // A page path (no file extension) gets the app; a missing file such as /favicon.ico gets a plain 404.
+  app.get(/^\/(?!api\/)[^.]*$/, (_req, res) => {
+    res.setHeader('Cache-Control', 'no-cache');
     res.sendFile(index);
   });
 }

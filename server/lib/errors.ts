@@ -44,6 +44,10 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
   } else if (isBodyParseError(err)) {
     status = err.status;
     body = { code: 'bad_request', message: 'The request body could not be read as JSON.' };
+  } else if (isClientHttpError(err)) {
+    // 4xx errors raised by Express's own middleware (static files, body size): safe to pass on.
+    status = err.status;
+    body = { code: status === 404 ? 'not_found' : 'bad_request', message: status === 404 ? `${req.path} was not found.` : err.message };
   } else {
     body = {
       code: 'internal_error',
@@ -56,4 +60,11 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
 
 function isBodyParseError(err: unknown): err is { status: number; type: string } {
   return typeof err === 'object' && err !== null && 'type' in err && (err as { type: unknown }).type === 'entity.parse.failed';
+}
+
+function isClientHttpError(err: unknown): err is { status: number; message: string } {
+  if (typeof err !== 'object' || err === null) return false;
+  const { status, expose } = err as { status?: unknown; expose?: unknown };
+  // send() marks a missing file's 404 as not exposed; our 404 message is our own, so it is safe either way.
+  return typeof status === 'number' && status >= 400 && status < 500 && (expose === true || status === 404);
 }

@@ -27,7 +27,7 @@ export function PressCard({ press }: { press: Press }) {
         </p>
       </header>
       {place && <p className="mt-1 text-lg text-ink-muted">{place}</p>}
-      <dl className="mt-4 grid grid-cols-1 gap-x-6 gap-y-3 text-lg sm:grid-cols-2 lg:grid-cols-4">
+      <dl className="mt-4 grid grid-cols-2 gap-x-6 gap-y-3 text-lg lg:grid-cols-4">
         <Detail term="Control model" value={press.controlModel} />
         <Detail term="Sensor generation" value={press.sensorGeneration} />
         <Detail term="Control firmware" value={press.controlFirmware} />
