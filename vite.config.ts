@@ -41,6 +41,8 @@ export default defineConfig({
           environment: 'jsdom',
           include: ['src/**/*.test.{ts,tsx}'],
           setupFiles: ['tests/setup/web.ts'],
+          // Whole-app renders with lazy routes are slow on a busy 2-core machine; a hang still fails.
+          testTimeout: 15_000,
         },
       },
     ],

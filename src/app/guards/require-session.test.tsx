@@ -74,6 +74,6 @@ describe('Sign-in guard and role access', () => {
     renderApp('/customers');
 
     expect(await screen.findByRole('heading', { level: 2, name: 'Example Stampings (invented)' })).toBeInTheDocument();
-    expect(document.title).toBe('Customers · Crankwise');
+    await waitFor(() => expect(document.title).toBe('Customers · Crankwise'));
   });
 });

@@ -48,7 +48,7 @@ describe('Presses page', () => {
     expect(within(second).getByText('2.9')).toBeInTheDocument();
     expect(within(second).getByText('Monitor firmware').nextElementSibling).toHaveTextContent('not recorded');
     expect(screen.getByText('1–2 of 2 presses · page 1 of 1')).toBeInTheDocument();
-    expect(document.title).toBe('Presses · Crankwise');
+    await waitFor(() => expect(document.title).toBe('Presses · Crankwise'));
   });
 
   it('searches as the person types, keeps the search in the address, and asks the API for it', async () => {
