@@ -31,6 +31,22 @@ export const appRoutes: RouteObject[] = [
             lazy: async () => ({ Component: (await import('./routes/presses/presses-page')).PressesPage }),
           },
           {
+            path: '/visits',
+            lazy: async () => ({ Component: (await import('./routes/visits/my-visits-page')).MyVisitsPage }),
+          },
+          {
+            path: '/visits/new',
+            lazy: async () => ({ Component: (await import('./routes/visits/start-visit-page')).StartVisitPage }),
+          },
+          {
+            path: '/visits/:id',
+            lazy: async () => ({ Component: (await import('./routes/visits/visit-workspace-page')).VisitWorkspacePage }),
+          },
+          {
+            path: '/visits/:id/close',
+            lazy: async () => ({ Component: (await import('./routes/visits/close-out-page')).CloseOutPage }),
+          },
+          {
             element: <RequireRole roles={OFFICE_ROLES} />,
             children: [
               {

@@ -19,18 +19,16 @@ async function openPressesAs(person: SessionUser) {
 }
 
 describe('Role-aware shell', () => {
-  it('gives a technician the presses only, with a note that visits are not built yet', async () => {
-    expect(await openPressesAs(technician)).toEqual(['Presses']);
-    expect(screen.getByText('Visits are not in Crankwise yet.')).toBeInTheDocument();
+  it('gives a technician their visits and the presses', async () => {
+    expect(await openPressesAs(technician)).toEqual(['My visits', 'Presses']);
   });
 
-  it('gives a service manager presses and customers', async () => {
-    expect(await openPressesAs(manager)).toEqual(['Presses', 'Customers']);
-    expect(screen.queryByText('Visits are not in Crankwise yet.')).not.toBeInTheDocument();
+  it('gives a service manager their own visits, presses and customers', async () => {
+    expect(await openPressesAs(manager)).toEqual(['My visits', 'Presses', 'Customers']);
   });
 
-  it('gives an administrator presses and customers', async () => {
-    expect(await openPressesAs(admin)).toEqual(['Presses', 'Customers']);
+  it('gives an administrator their own visits, presses and customers', async () => {
+    expect(await openPressesAs(admin)).toEqual(['My visits', 'Presses', 'Customers']);
   });
 
   it("shows who is signed in, in what role, and marks the current page", async () => {

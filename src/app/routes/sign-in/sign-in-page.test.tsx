@@ -1,7 +1,7 @@
 import { screen, waitFor } from '@testing-library/react';
 import { renderApp } from '@/testing/render-app';
 import { apiError, mockApi } from '@/testing/mock-api';
-import { manager, pageOf, press, technician } from '@/testing/fixtures';
+import { manager, pageOf, technician } from '@/testing/fixtures';
 
 afterEach(() => {
   vi.unstubAllGlobals();
@@ -21,11 +21,11 @@ describe('Sign-in page', () => {
     await waitFor(() => expect(document.title).toBe('Sign in · Crankwise'));
   });
 
-  it("takes a technician to the presses list, the role's start page, after signing in", async () => {
+  it("takes a technician to their visits, the role's start page, after signing in", async () => {
     mockApi({
       'GET /api/session': signedOut,
       'POST /api/session': { status: 200, body: { user: technician } },
-      'GET /api/presses': { status: 200, body: pageOf([press()]) },
+      'GET /api/visits': { status: 200, body: pageOf([]) },
     });
     const { user, router } = renderApp('/sign-in');
 
@@ -33,8 +33,8 @@ describe('Sign-in page', () => {
     await user.type(screen.getByLabelText('Password'), 'correct horse');
     await user.click(screen.getByRole('button', { name: 'Sign in' }));
 
-    expect(await screen.findByRole('heading', { level: 1, name: 'Presses' })).toBeInTheDocument();
-    expect(router.state.location.pathname).toBe('/presses');
+    expect(await screen.findByRole('heading', { level: 1, name: 'My visits' })).toBeInTheDocument();
+    expect(router.state.location.pathname).toBe('/visits');
     expect(screen.getByText(technician.name)).toBeInTheDocument();
   });
 

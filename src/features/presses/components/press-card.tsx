@@ -1,3 +1,5 @@
+import { Link } from 'react-router-dom';
+import { buttonVariants } from '@/components/ui/button';
 import type { Press } from '@shared/schemas/press';
 
 const NOT_RECORDED = 'not recorded';
@@ -33,6 +35,15 @@ export function PressCard({ press }: { press: Press }) {
         <Detail term="Control firmware" value={press.controlFirmware} />
         <Detail term="Monitor firmware" value={press.monitorFirmware} />
       </dl>
+      <div className="mt-4">
+        <Link
+          to={`/visits/new?pressId=${press.id}`}
+          className={buttonVariants({ variant: 'secondary' })}
+          aria-label={`Start a visit on ${press.assetTag}`}
+        >
+          Start visit
+        </Link>
+      </div>
     </article>
   );
 }

@@ -1,0 +1,249 @@
+import { configure, render, screen, waitFor, within } from '@testing-library/react';
+import userEvent, { type UserEvent } from '@testing-library/user-event';
+import { createMemoryRouter, RouterProvider, useParams } from 'react-router-dom';
+import { closeOutSchema } from '@shared/schemas/visit';
+import { createAppQueryClient } from '@/app/create-app-query-client';
+import { AppProvider } from '@/app/provider';
+import { visitAtFinding } from '@/testing/close-out-fixtures';
+import { customer } from '@/testing/fixtures';
+import { apiError, mockApi, type RecordedCall } from '@/testing/mock-api';
+import { CloseOutPage } from './close-out-page';
+
+// jsdom has no canvas (getContext and toDataURL are "not implemented"). They are replaced with a
+// do-nothing 2D context and a fixed, real 1×1 PNG data URL, so these tests check what the page
+// does with a signature, not the pixels a browser would draw.
+const PNG = 'data:image/png;base64,iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mNkYPhfDwAChwGA60e6kgAAAABJRU5ErkJggg==';
+
+beforeEach(() => {
+  const ctx = { fillRect: vi.fn(), beginPath: vi.fn(), moveTo: vi.fn(), lineTo: vi.fn(), stroke: vi.fn(), drawImage: vi.fn() };
+  vi.spyOn(HTMLCanvasElement.prototype, 'getContext').mockReturnValue(ctx as unknown as CanvasRenderingContext2D);
+  vi.spyOn(HTMLCanvasElement.prototype, 'toDataURL').mockReturnValue(PNG);
+});
+
+// Screens here wait on mocked requests; a busy two-core machine can take over a second.
+configure({ asyncUtilTimeout: 5000 });
+
+afterEach(() => {
+  vi.restoreAllMocks();
+  vi.unstubAllGlobals();
+});
+
+function WorkspaceStub() {
+  return <h1>Visit workspace {useParams().id}</h1>;
+}
+
+function renderCloseOut(url = '/visits/7/close') {
+  const router = createMemoryRouter(
+    [
+      { path: '/visits/:id/close', element: <CloseOutPage /> },
+      { path: '/visits/:id', element: <WorkspaceStub /> },
+    ],
+    { initialEntries: [url] },
+  );
+  const user = userEvent.setup();
+  render(
+    <AppProvider queryClient={createAppQueryClient()}>
+      <RouterProvider router={router} />
+    </AppProvider>,
+  );
+  return { user, router };
+}
+
+type Handler = (call: RecordedCall) => { status: number; body?: unknown };
+
+function closeOutApi(close: Handler | { status: number; body?: unknown } = { status: 200, body: visitAtFinding({ status: 'closed' }) }, visit = visitAtFinding()) {
+  return mockApi({
+    'GET /api/visits/7': { status: 200, body: visit },
+    'GET /api/customers/100': { status: 200, body: customer() },
+    'GET /api/visits/7/attachments': { status: 200, body: { items: [] } },
+    'POST /api/visits/7/close': close,
+  });
+}
+
+/** The form shows once the visit and the customer's contact are in. */
+const formReady = () => screen.findByRole('button', { name: 'Close the visit' });
+
+async function sign(user: UserEvent) {
+  const pad = screen.getByLabelText('Customer signature');
+  await user.pointer([
+    { keys: '[TouchA>]', target: pad, coords: { clientX: 20, clientY: 40 } },
+    { pointerName: 'TouchA', target: pad, coords: { clientX: 120, clientY: 70 } },
+    { keys: '[/TouchA]', target: pad },
+  ]);
+}
+
+/** Fills every required answer the way a technician would, plus one part. */
+async function fillCloseOut(user: UserEvent) {
+  // Long text is pasted, as a technician's tablet keyboard would dictate it; typing it key by key only slows the test.
+  await user.click(screen.getByRole('textbox', { name: 'Actions taken' }));
+  await user.paste('Straightened pin 3, re-seated the connector, coupling ring hand-tight.');
+  await user.click(screen.getByRole('button', { name: /Add a part/ }));
+  await user.type(screen.getByRole('textbox', { name: 'Part number' }), 'INV-CX-0042');
+  await user.click(screen.getByRole('textbox', { name: 'Description' }));
+  await user.paste('Circular connector insert (invented)');
+  await user.type(screen.getByRole('textbox', { name: 'Serial fitted (optional)' }), 'SN-INV-77');
+  await user.type(screen.getByRole('textbox', { name: 'Labour minutes' }), '95');
+  await user.type(screen.getByRole('textbox', { name: 'Travel minutes' }), '40');
+  await user.click(screen.getByRole('checkbox', { name: /fault has cleared/ }));
+  await user.click(screen.getByRole('checkbox', { name: /top dead centre/ }));
+  await user.click(screen.getByRole('checkbox', { name: /stopping-time \/ brake-monitor check passed/ }));
+  await user.type(screen.getByRole('textbox', { name: /Measured stopping time/ }), '180');
+  await user.click(screen.getByRole('radio', { name: 'At or beyond its safety distance' }));
+  await sign(user);
+}
+
+// Filling a whole form by key and tap takes a few seconds on a busy two-core machine.
+describe('Close-out page', { timeout: 20_000 }, () => {
+  it('shows the visit, the finding reached, and preselects the suggested cause with its reasons', async () => {
+    closeOutApi();
+    renderCloseOut();
+
+    expect(await screen.findByRole('heading', { name: 'Close out V-000007' })).toBeInTheDocument();
+    expect(screen.getByText('PX-101 · Invented SP-250')).toBeInTheDocument();
+    expect(screen.getByText('Example Stampings (invented) · Plant North (invented)')).toBeInTheDocument();
+    expect(screen.getByText('E-417 crank angle invalid (invented)')).toBeInTheDocument();
+
+    const suggested = await screen.findByRole('radio', { name: /Wiring or connector/ });
+    expect(screen.getByText('Finding reached:').parentElement).toHaveTextContent('Finding reached: Circular connector loose or damaged');
+    expect(suggested).toBeChecked();
+    expect(suggested).toHaveAccessibleName('Wiring or connector Suggested');
+    expect(suggested).toHaveAccessibleDescription(/Finding reached: Circular connector loose or damaged\./);
+    expect(screen.getByRole('radio', { name: 'Sensor' })).not.toBeChecked();
+    // The technician decides.
+    expect(screen.getByRole('radio', { name: 'Sensor' })).toBeEnabled();
+  });
+
+  it("pre-fills the customer's contact and the firmware as found", async () => {
+    closeOutApi();
+    renderCloseOut();
+
+    expect(await screen.findByRole('textbox', { name: 'Contact name' })).toHaveValue('Pat Placeholder');
+    expect(screen.getByRole('textbox', { name: 'Contact e-mail' })).toHaveValue('pat@example.test');
+    expect(screen.getByRole('textbox', { name: 'Press-control firmware as left' })).toHaveValue('2.10');
+    expect(screen.getByRole('textbox', { name: 'Monitor-module firmware as left' })).toHaveValue('3.1.4');
+  });
+
+  it('shows what is missing beside each field and sends nothing', async () => {
+    const api = closeOutApi();
+    const { user } = renderCloseOut();
+    await formReady();
+
+    await user.click(screen.getByRole('button', { name: 'Close the visit' }));
+
+    const faultCleared = screen.getByRole('checkbox', { name: /fault has cleared/ });
+    await waitFor(() => expect(faultCleared).toHaveAttribute('aria-invalid', 'true'));
+    expect(faultCleared).toHaveAccessibleDescription('Confirm the fault has cleared on the control');
+    expect(screen.getByRole('checkbox', { name: /top dead centre/ })).toHaveAccessibleDescription(
+      'Confirm the crank-angle display reads top dead centre with the slide at top',
+    );
+    expect(screen.getByRole('textbox', { name: 'Actions taken' })).toHaveAccessibleDescription(/Describe what you did/);
+    expect(screen.getByRole('textbox', { name: 'Labour minutes' })).toHaveAccessibleDescription(/Enter the labour time in whole minutes/);
+    expect(screen.getByLabelText('Customer signature')).toHaveAccessibleDescription(/Ask the customer to sign in the box/);
+    expect(screen.getByRole('group', { name: 'Presence-sensing device distance' })).toHaveAccessibleDescription(
+      /Say whether the presence-sensing device still sits at a safe distance/,
+    );
+    expect(screen.getByText('Some answers need attention')).toBeInTheDocument();
+    expect(api.callsTo('POST', '/api/visits/7/close')).toHaveLength(0);
+  });
+
+  it('shows the minimum safety distance for a typed stopping time, naming the standard', async () => {
+    closeOutApi();
+    const { user } = renderCloseOut();
+    await formReady();
+
+    await user.type(screen.getByRole('textbox', { name: /Measured stopping time/ }), '500');
+
+    // OSHA 29 CFR 1910.217(c)(3)(iii)(e): Ds = 63 in/s × Ts; for Ts = 0.5 s, 63 × 0.5 = 31.5 in,
+    // and 31.5 in × 25.4 mm/in = 800.1 mm (worked by hand).
+    expect(screen.getByText(/Minimum safety distance for a stopping time of 500 ms/)).toHaveTextContent('31.5 in (800.1 mm)');
+    expect(screen.getByText(/OSHA 29 CFR 1910\.217\(c\)\(3\)\(iii\)\(e\): Ds = 63 in\/s × 0\.5 s/)).toBeInTheDocument();
+    expect(screen.getByRole('region', { name: 'WARNING safety notice' })).toHaveTextContent(/lockout\/tagout procedure, local electrical codes and licensed practice/);
+  });
+
+  it('posts a close-out the shared schema accepts, with the part and the signature, then opens the closed visit', async () => {
+    const api = closeOutApi();
+    const { user, router } = renderCloseOut();
+    await formReady();
+
+    await fillCloseOut(user);
+    expect(screen.getByText('= 1:35 (hours:minutes)')).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Close the visit' }));
+
+    expect(await screen.findByRole('heading', { name: 'Visit workspace 7' })).toBeInTheDocument();
+    expect(router.state.location.pathname).toBe('/visits/7');
+    const [post] = api.callsTo('POST', '/api/visits/7/close');
+    const parsed = closeOutSchema.safeParse(post!.body);
+    expect(parsed.success).toBe(true);
+    expect(post!.body).toMatchObject({
+      causeCategory: 'wiring',
+      labourMinutes: 95,
+      travelMinutes: 40,
+      controlFirmwareLeft: '2.10',
+      contactName: 'Pat Placeholder',
+      contactEmail: 'pat@example.test',
+      signaturePng: PNG,
+      returnToService: { faultCleared: true, tdcAgrees: true, stoppingTimeChecked: true, stoppingTimeMs: 180, presenceSensingDistanceOk: 'yes' },
+      parts: [{ partNumber: 'INV-CX-0042', description: 'Circular connector insert (invented)', quantity: 1, serialFitted: 'SN-INV-77' }],
+    });
+    const body = post!.body as { parts: Array<{ id: string; serialRemoved?: string }> };
+    expect(body.parts[0]!.id).toMatch(/^[0-9a-f]{8}-[0-9a-f]{4}-4[0-9a-f]{3}-[89ab][0-9a-f]{3}-[0-9a-f]{12}$/);
+    expect(body.parts[0]).not.toHaveProperty('serialRemoved');
+  });
+
+  it("shows the server's 409 with the way back to the visit", async () => {
+    const message = 'Work the procedure through to a finding before closing. It is waiting at "Measure the windings at the control end".';
+    closeOutApi(apiError(409, 'no_finding', message));
+    const { user } = renderCloseOut();
+    await formReady();
+
+    await fillCloseOut(user);
+    await user.click(screen.getByRole('button', { name: 'Close the visit' }));
+
+    const banner = (await screen.findByText('The visit cannot be closed yet')).closest('[role="alert"]') as HTMLElement;
+    expect(banner).toHaveTextContent(message);
+    expect(within(banner).getByRole('link', { name: 'Back to the visit' })).toHaveAttribute('href', '/visits/7');
+  });
+
+  it('keeps everything typed after a network failure and retries with the same part id', async () => {
+    let tries = 0;
+    const api = closeOutApi(() => {
+      tries += 1;
+      if (tries === 1) throw new TypeError('Failed to fetch');
+      return { status: 200, body: visitAtFinding({ status: 'closed' }) };
+    });
+    const { user } = renderCloseOut();
+    await formReady();
+    await fillCloseOut(user);
+
+    await user.click(screen.getByRole('button', { name: 'Close the visit' }));
+    const banner = await screen.findByText('The close-out was not sent');
+    expect(screen.getByRole('textbox', { name: 'Part number' })).toHaveValue('INV-CX-0042');
+
+    await user.click(within(banner.closest('[role="alert"]') as HTMLElement).getByRole('button', { name: 'Retry' }));
+
+    expect(await screen.findByRole('heading', { name: 'Visit workspace 7' })).toBeInTheDocument();
+    const posts = api.callsTo('POST', '/api/visits/7/close');
+    expect(posts).toHaveLength(2);
+    const partId = (call: RecordedCall) => (call.body as { parts: Array<{ id: string }> }).parts[0]!.id;
+    expect(partId(posts[1]!)).toBe(partId(posts[0]!));
+  });
+
+  it('refuses a visit without a finding and links back to it', async () => {
+    closeOutApi(undefined, visitAtFinding({ traversal: { ...visitAtFinding().traversal, findingIds: [], currentStepId: 'resistance-control-end' } }));
+    renderCloseOut();
+
+    expect(await screen.findByText('No finding reached yet')).toBeInTheDocument();
+    expect(screen.getByText(/Work the procedure through to a finding before closing\. It is waiting at “/)).toBeInTheDocument();
+    expect(screen.getByRole('link', { name: 'Back to the visit' })).toHaveAttribute('href', '/visits/7');
+    expect(screen.queryByRole('form', { name: 'Close-out' })).not.toBeInTheDocument();
+  });
+
+  it('refuses a visit that is already closed', async () => {
+    closeOutApi(undefined, visitAtFinding({ status: 'closed' }));
+    renderCloseOut();
+
+    expect(await screen.findByText('This visit is already closed')).toBeInTheDocument();
+    expect(screen.getByRole('link', { name: 'Back to the visit' })).toHaveAttribute('href', '/visits/7');
+    expect(screen.queryByRole('button', { name: 'Close the visit' })).not.toBeInTheDocument();
+  });
+});

@@ -1,0 +1,54 @@
+import { useQuery } from '@tanstack/react-query';
+import { Link, useNavigate, useParams } from 'react-router-dom';
+import { Banner } from '@/components/ui/banner';
+import { LoadError } from '@/components/ui/load-error';
+import { Spinner } from '@/components/ui/spinner';
+import { customerContactOptions } from '@/features/close-out/api/customer-contact-query';
+import { visitDetailOptions } from '@/features/close-out/api/visit-detail-query';
+import { CloseOutBlocked } from '@/features/close-out/components/close-out-blocked';
+import { CloseOutForm } from '@/features/close-out/components/close-out-form';
+import { CloseOutHeader } from '@/features/close-out/components/close-out-header';
+import { closeOutBlocker } from '@/features/close-out/utils/close-out-blocker';
+import { PhotoPanel } from '@/features/photos/components/photo-panel';
+import { useDocumentTitle } from '@/lib/use-document-title';
+
+export function CloseOutPage() {
+  const params = useParams();
+  const visitId = Number(params.id);
+  const validId = Number.isInteger(visitId) && visitId > 0;
+  const navigate = useNavigate();
+
+  const visit = useQuery({ ...visitDetailOptions(visitId), enabled: validId });
+  useDocumentTitle(visit.data ? `Close out ${visit.data.reference}` : 'Close out');
+  const blocker = visit.data ? closeOutBlocker(visit.data) : null;
+  const customerId = visit.data?.press?.customerId;
+  const contact = useQuery({ ...customerContactOptions(customerId ?? 0), enabled: customerId !== undefined && visit.data !== undefined && !blocker });
+
+  if (!validId) {
+    return (
+      <Banner tone="error" title="No such visit" action={<Link to="/">Go to my visits</Link>}>
+        The address does not name a visit. Open the visit from your list.
+      </Banner>
+    );
+  }
+  if (visit.isPending) return <Spinner label="Loading the visit…" />;
+  if (visit.isError) return <LoadError error={visit.error} what="the visit" onRetry={() => void visit.refetch()} />;
+
+  const detail = visit.data;
+  // The contact only pre-fills two fields: when it cannot be loaded they are typed instead.
+  const waitingForContact = customerId !== undefined && !blocker && contact.isPending;
+
+  return (
+    <>
+      <CloseOutHeader visit={detail} />
+      {blocker && <CloseOutBlocked blocker={blocker} visitId={detail.id} />}
+      {!blocker && waitingForContact && <Spinner label="Loading the customer’s contact…" />}
+      {!blocker && !waitingForContact && (
+        <div className="space-y-10">
+          <PhotoPanel visitId={detail.id} stepId={null} prompt="Photograph the repair, the parts you took out and the control as you left it." />
+          <CloseOutForm visit={detail} contact={contact.data} onClosed={(closed) => void navigate(`/visits/${closed.id}`)} />
+        </div>
+      )}
+    </>
+  );
+}

@@ -1,0 +1,71 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { FormProvider, useForm, type FieldPath } from 'react-hook-form';
+import { closeOutSchema, type CloseOutInput } from '@shared/schemas/visit';
+import type { VisitDetail } from '@shared/schemas/visit-detail';
+import { Banner } from '@/components/ui/banner';
+import { Button } from '@/components/ui/button';
+import { isApiError } from '@/lib/api-error';
+import { useCloseVisit } from '../api/use-close-visit';
+import { closeOutErrorMap } from '../utils/close-out-error-map';
+import { closeOutDefaults, type CloseOutFields, type CustomerContact } from '../utils/close-out-values';
+import { CauseSection } from './cause-section';
+import { ContactSection } from './contact-section';
+import { PartsSection } from './parts-section';
+import { ReturnToServiceSection } from './return-to-service-section';
+import { SubmitProblem } from './submit-problem';
+import { TimeFirmwareSection } from './time-firmware-section';
+import { WorkSection } from './work-section';
+
+interface CloseOutFormProps {
+  visit: VisitDetail;
+  /** The customer's contact on record, to pre-fill who signs; absent when there is none. */
+  contact?: CustomerContact;
+  onClosed: (visit: VisitDetail) => void;
+}
+
+/** Everything the close-out needs, checked against the same schema the server uses. */
+export function CloseOutForm({ visit, contact, onClosed }: CloseOutFormProps) {
+  const close = useCloseVisit(visit.id);
+  const form = useForm<CloseOutFields, unknown, CloseOutInput>({
+    resolver: zodResolver(closeOutSchema, { error: closeOutErrorMap }),
+    defaultValues: closeOutDefaults(visit, contact),
+  });
+  const { errors, isSubmitting } = form.formState;
+
+  const submit = form.handleSubmit(async (values) => {
+    try {
+      onClosed(await close.mutateAsync(values));
+    } catch (error) {
+      // The server names fields by their path (returnToService.tdcAgrees): the same names as the form's.
+      if (!isApiError(error)) return;
+      for (const [name, message] of Object.entries(error.fields)) form.setError(name as FieldPath<CloseOutFields>, { message });
+    }
+  });
+
+  const busy = isSubmitting || close.isPending;
+  const invalid = Object.keys(errors).length > 0;
+
+  return (
+    <FormProvider {...form}>
+      <form onSubmit={submit} noValidate aria-label="Close-out" className="space-y-10">
+        <CauseSection visit={visit} />
+        <WorkSection />
+        <PartsSection />
+        <TimeFirmwareSection />
+        <ReturnToServiceSection />
+        <ContactSection />
+        <div className="space-y-4">
+          {close.isError && !busy && <SubmitProblem error={close.error} visitId={visit.id} onRetry={() => void submit()} />}
+          {invalid && !close.isError && (
+            <Banner tone="error" title="Some answers need attention">
+              Look for the messages marked ✕ above; each says what to do.
+            </Banner>
+          )}
+          <Button type="submit" size="lg" block disabled={busy}>
+            {busy ? 'Closing the visit…' : 'Close the visit'}
+          </Button>
+        </div>
+      </form>
+    </FormProvider>
+  );
+}

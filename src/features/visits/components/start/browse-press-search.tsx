@@ -1,0 +1,80 @@
+import { useQuery } from '@tanstack/react-query';
+import { useState } from 'react';
+import type { Customer } from '@shared/schemas/customer';
+import type { Press } from '@shared/schemas/press';
+import type { Site } from '@shared/schemas/site';
+import { Button } from '@/components/ui/button';
+import { SearchBox } from '@/components/ui/search-box';
+import { customerPickOptions, pressPickOptions, sitePickOptions } from '../../api/press-lookup-queries';
+import { PickList } from './pick-list';
+import { PressChoiceList } from './press-choice-list';
+import { SearchResults } from './search-results';
+
+/** Customer, then site, then press: for when the asset tag is not to hand. */
+export function BrowsePressSearch({ onChoose }: { onChoose: (press: Press) => void }) {
+  const [customer, setCustomer] = useState<Customer | null>(null);
+  const [site, setSite] = useState<Site | null>(null);
+  const [q, setQ] = useState('');
+  const customers = useQuery({ ...customerPickOptions(q), enabled: !customer });
+  const sites = useQuery({ ...sitePickOptions(customer?.id ?? 0, q), enabled: customer !== null && !site });
+  const presses = useQuery({ ...pressPickOptions({ q, siteId: site?.id }), enabled: site !== null });
+
+  const back = (to: 'customer' | 'site') => {
+    setQ('');
+    setSite(null);
+    if (to === 'customer') setCustomer(null);
+  };
+
+  return (
+    <div className="space-y-3">
+      {customer && (
+        <p className="flex flex-wrap items-center gap-3 text-lg text-ink">
+          <span>
+            Customer: <strong>{customer.name}</strong>
+          </span>
+          <Button variant="quiet" onClick={() => back('customer')}>
+            Change customer
+          </Button>
+        </p>
+      )}
+      {site && (
+        <p className="flex flex-wrap items-center gap-3 text-lg text-ink">
+          <span>
+            Site: <strong>{site.name}</strong>
+          </span>
+          <Button variant="quiet" onClick={() => back('site')}>
+            Change site
+          </Button>
+        </p>
+      )}
+      {!customer ? (
+        <>
+          <SearchBox key="customer" label="Customer" value={q} onSearch={setQ} />
+          <SearchResults query={customers} what="customers" empty="No customer matches. Check the spelling.">
+            {(items) => <PickList items={items} label="Customers" onPick={(c) => {
+                  setCustomer(c);
+                  setQ('');
+                }} />}
+          </SearchResults>
+        </>
+      ) : !site ? (
+        <>
+          <SearchBox key="site" label="Site" value={q} onSearch={setQ} />
+          <SearchResults query={sites} what="sites" empty="No site of this customer matches.">
+            {(items) => <PickList items={items} label="Sites" onPick={(s) => {
+                  setSite(s);
+                  setQ('');
+                }} describe={(s) => s.city} />}
+          </SearchResults>
+        </>
+      ) : (
+        <>
+          <SearchBox key="press" label="Press at this site" value={q} onSearch={setQ} />
+          <SearchResults query={presses} what="presses" empty="No press at this site matches.">
+            {(items) => <PressChoiceList presses={items} onChoose={onChoose} label="Presses at this site" />}
+          </SearchResults>
+        </>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,110 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useId, useState } from 'react';
+import { useForm, useWatch } from 'react-hook-form';
+import type { z } from 'zod';
+import type { Press } from '@shared/schemas/press';
+import { visitCreateSchema, type VisitCreateInput } from '@shared/schemas/visit';
+import type { VisitDetail } from '@shared/schemas/visit-detail';
+import { Banner } from '@/components/ui/banner';
+import { Button } from '@/components/ui/button';
+import { Field } from '@/components/ui/field';
+import { TextInput } from '@/components/ui/text-input';
+import { errorMessage, isApiError } from '@/lib/api-error';
+import { useCreateVisit } from '../../api/use-create-visit';
+import { suggestProcedure } from '../../lib/suggest-procedure';
+import { PressPicker } from './press-picker';
+
+type StartFields = z.input<typeof visitCreateSchema>;
+const FIELD_NAMES = ['pressId', 'faultDisplayed', 'controlFirmwareFound', 'monitorFirmwareFound', 'procedureKey'] as const;
+
+/** Press, fault as displayed, firmware as found and the procedure: everything needed to start. */
+export function StartVisitForm({ initialPress, onStarted }: { initialPress: Press | null; onStarted: (visit: VisitDetail) => void }) {
+  const id = useId();
+  const create = useCreateVisit();
+  const [press, setPress] = useState<Press | null>(initialPress);
+  const {
+    register,
+    handleSubmit,
+    setValue,
+    setError,
+    control,
+    formState: { errors, isSubmitting },
+  } = useForm<StartFields, unknown, VisitCreateInput>({
+    resolver: zodResolver(visitCreateSchema),
+    defaultValues: {
+      pressId: initialPress?.id ?? 0,
+      faultDisplayed: '',
+      controlFirmwareFound: initialPress?.controlFirmware ?? '',
+      monitorFirmwareFound: initialPress?.monitorFirmware ?? '',
+      procedureKey: 'crank-angle-sensor-circuit',
+    },
+  });
+  const suggestion = suggestProcedure(useWatch({ control, name: 'faultDisplayed' }) ?? '');
+
+  const choosePress = (next: Press | null) => {
+    setPress(next);
+    setValue('pressId', next?.id ?? 0, { shouldValidate: next !== null });
+    // Pre-filled from the press record; the technician corrects them to what the displays show.
+    setValue('controlFirmwareFound', next?.controlFirmware ?? '');
+    setValue('monitorFirmwareFound', next?.monitorFirmware ?? '');
+  };
+
+  const onSubmit = handleSubmit(async (values) => {
+    try {
+      onStarted(await create.mutateAsync(values));
+    } catch (error) {
+      if (!isApiError(error)) return;
+      for (const name of FIELD_NAMES) {
+        const message = error.fields[name];
+        if (message) setError(name, { message });
+      }
+    }
+  });
+
+  return (
+    <div className="space-y-8">
+      <PressPicker press={press} onChange={choosePress} error={errors.pressId?.message} errorId={`${id}-press-error`} />
+      <form onSubmit={onSubmit} noValidate aria-label="Start a visit" className="space-y-6">
+        {create.isError && (
+          <Banner tone="error" role="alert" title="The visit has not started">
+            {errorMessage(create.error)}
+          </Banner>
+        )}
+        <input type="hidden" {...register('pressId')} />
+        <Field label="Fault as displayed" hint="Type it exactly as the control shows it, codes included." error={errors.faultDisplayed?.message}>
+          <TextInput autoComplete="off" {...register('faultDisplayed')} />
+        </Field>
+        <fieldset className="space-y-3">
+          <legend className="text-lg font-semibold text-ink">Firmware as found</legend>
+          <p className="text-base text-ink-muted">Filled in from the press record. Correct them to what the displays show today.</p>
+          <div className="grid gap-4 sm:grid-cols-2">
+            <Field label="Press control firmware" error={errors.controlFirmwareFound?.message}>
+              <TextInput inputMode="decimal" autoComplete="off" {...register('controlFirmwareFound')} />
+            </Field>
+            <Field label="Monitor module firmware" error={errors.monitorFirmwareFound?.message}>
+              <TextInput inputMode="decimal" autoComplete="off" {...register('monitorFirmwareFound')} />
+            </Field>
+          </div>
+        </fieldset>
+        <fieldset className="space-y-2">
+          <legend className="text-lg font-semibold text-ink">Procedure</legend>
+          <label className="flex min-h-touch items-start gap-3 rounded-lg border-2 border-accent bg-surface-raised p-4 text-lg text-ink">
+            <input type="radio" value={suggestion.choice.key} className="mt-1 h-6 w-6 accent-accent" {...register('procedureKey')} />
+            <span>
+              <span className="block font-semibold">{suggestion.choice.title}</span>
+              <span className="block text-base text-ink-muted">{suggestion.because}</span>
+            </span>
+          </label>
+          {errors.procedureKey?.message && (
+            <p role="alert" className="text-base font-medium text-verdict-out_of_band">
+              {errors.procedureKey.message}
+            </p>
+          )}
+        </fieldset>
+        <Button type="submit" size="lg" disabled={isSubmitting || create.isPending}>
+          {isSubmitting || create.isPending ? 'Starting…' : 'Start the visit'}
+        </Button>
+      </form>
+    </div>
+  );
+}

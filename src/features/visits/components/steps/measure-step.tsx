@@ -1,0 +1,119 @@
+import { useState } from 'react';
+import { judgeEntry, OTHER_STATOR, type EntryContext } from '@shared/domain/judge-entry';
+import type { ResolverOutput } from '@shared/domain/resolver-output';
+import type { MeasureStep, ReadingSpec } from '@shared/schemas/procedure';
+import type { StepResultRecord, VisitDetail } from '@shared/schemas/visit-detail';
+import { Button } from '@/components/ui/button';
+import type { StepAnswerVars } from '../../api/use-answer-step';
+import type { ResilientSave } from '../../hooks/use-resilient-save';
+import { conditionsKey, draftFromReading, parseConditions, storedConditions } from '../../lib/reading-conditions';
+import { answerReason, currentReadings, outcomeLabel } from '../../lib/step-records';
+import { SaveStatusBanner } from '../save-status-banner';
+import { GenerationPicker } from './generation-picker';
+import { ReadingConditionsFields } from './reading-conditions-fields';
+import { ReadingInput } from './reading-input';
+import { ResolverPanel } from './resolver-panel';
+
+interface MeasureStepViewProps {
+  visit: VisitDetail;
+  step: MeasureStep;
+  result: StepResultRecord | undefined;
+  answer: ResilientSave<StepAnswerVars, VisitDetail>;
+  editable: boolean;
+}
+
+const specMatches = (spec: ReadingSpec) => (r: { quantity: string; circuit: string; position: string }) =>
+  r.quantity === spec.quantity && r.circuit === spec.circuit && r.position === spec.position;
+
+/** A stator voltage is judged with its partner, and excitation gives the ratio (DESIGN.md §4.6). */
+function contextFor(spec: ReadingSpec, specs: ReadingSpec[], drafts: Record<string, string>): EntryContext {
+  if (spec.quantity !== 'ac_voltage' || spec.circuit === 'rotor') return {};
+  const partner = specs.find((s) => s.quantity === 'ac_voltage' && s.position === spec.position && s.circuit === OTHER_STATOR[spec.circuit as 'stator_1' | 'stator_2']);
+  const excitation = specs.find((s) => s.quantity === 'ac_voltage' && s.position === spec.position && s.circuit === 'rotor');
+  return { otherStatorEntered: partner ? drafts[partner.key] : undefined, excitationEntered: excitation ? drafts[excitation.key] : undefined };
+}
+
+export function MeasureStepView({ visit, step, result, answer, editable }: MeasureStepViewProps) {
+  const stored = currentReadings(visit, step.id);
+  const [drafts, setDrafts] = useState<Record<string, string>>(() =>
+    Object.fromEntries(step.readings.map((spec) => [spec.key, stored.find(specMatches(spec))?.entered ?? ''])),
+  );
+  const [conditionsDraft, setConditionsDraft] = useState(() => draftFromReading(stored.find((r) => r.quantity === 'resistance')));
+  const [resaveRound, setResaveRound] = useState(0);
+  const [generation, setGeneration] = useState(visit.generationSuggestion?.best?.generationKey ?? '');
+  const bands = visit.bandSet?.bands ?? null;
+  const isResistance = step.readings.some((s) => s.quantity === 'resistance');
+  const { conditions, errors } = parseConditions(conditionsDraft);
+  const readingConditions = isResistance ? conditions : {};
+  const outdated = isResistance && stored.some((r) => conditionsKey(storedConditions(r)) !== conditionsKey(conditions));
+
+  let resolver: ResolverOutput | null = null;
+  if (bands && step.readings.some((s) => s.quantity === 'ac_voltage' && s.circuit !== 'rotor')) {
+    const sine = step.readings.find((s) => s.quantity === 'ac_voltage' && s.circuit === 'stator_1');
+    if (sine && drafts[sine.key]?.trim()) {
+      const j = judgeEntry({ quantity: 'ac_voltage', circuit: 'stator_1', position: sine.position, entered: drafts[sine.key]! }, bands, contextFor(sine, step.readings, drafts));
+      if (j.status === 'judged' && j.figures.kind === 'ac_voltage') resolver = j.figures.output;
+    }
+  }
+
+  const done = () =>
+    answer.save({
+      stepId: step.id,
+      body: { id: crypto.randomUUID(), ...(!visit.bandSet && generation ? { inputs: { sensor_generation: generation } } : {}) },
+    });
+
+  return (
+    <div className="space-y-4">
+      <p className="rounded-lg bg-surface-sunken px-4 py-3 text-lg text-ink">
+        <span className="font-semibold">Meter setting: </span>
+        {step.meterSetting}
+      </p>
+      {!visit.bandSet && (
+        <GenerationPicker suggestion={visit.generationSuggestion} bandSets={visit.availableBandSets} value={generation} onChange={setGeneration} disabled={!editable} />
+      )}
+      {isResistance && (
+        <ReadingConditionsFields
+          draft={conditionsDraft}
+          errors={errors}
+          onChange={setConditionsDraft}
+          onResave={outdated && Object.keys(errors).length === 0 ? () => setResaveRound((n) => n + 1) : undefined}
+          disabled={!editable}
+        />
+      )}
+      <div className="space-y-3">
+        {step.readings.map((spec) => (
+          <ReadingInput
+            key={spec.key}
+            visitId={visit.id}
+            stepId={step.id}
+            spec={spec}
+            draft={drafts[spec.key] ?? ''}
+            onDraftChange={(text) => setDrafts((d) => ({ ...d, [spec.key]: text }))}
+            bands={bands}
+            context={contextFor(spec, step.readings, drafts)}
+            conditions={readingConditions}
+            stored={stored.find(specMatches(spec))}
+            resaveRound={resaveRound}
+            disabled={!editable}
+          />
+        ))}
+      </div>
+      {step.readings.some((s) => s.quantity === 'ac_voltage' && s.circuit !== 'rotor') && <ResolverPanel output={resolver} />}
+      {result && (
+        <div className="rounded-lg border border-surface-line bg-surface-raised p-4 text-lg text-ink">
+          <p>
+            <span className="font-semibold">Step judged: </span>
+            {outcomeLabel(step, result.outcome)}
+          </p>
+          {answerReason(result) && <p className="text-ink-muted">{answerReason(result)}</p>}
+        </div>
+      )}
+      <SaveStatusBanner save={answer} what="the step answer" />
+      {editable && (
+        <Button size="lg" disabled={answer.isSaving} onClick={done}>
+          {answer.isSaving ? 'Judging…' : 'Done — judge this step'}
+        </Button>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,56 @@
+import type { ReactNode } from 'react';
+import type { StepInput } from '@shared/schemas/procedure';
+import type { BandSetRecord } from '@shared/schemas/visit-detail';
+import { Field } from '@/components/ui/field';
+import { TextInput } from '@/components/ui/text-input';
+
+interface StepInputFieldsProps {
+  inputs: StepInput[];
+  values: Record<string, string>;
+  errors: Record<string, string | undefined>;
+  onChange: (key: string, value: string) => void;
+  bandSets: BandSetRecord[];
+  /** Where a photo input is asked for, the page puts its photo panel. */
+  renderPhotos: (prompt: string) => ReactNode;
+  disabled: boolean;
+}
+
+const selectClass =
+  'block min-h-touch w-full max-w-md rounded-lg border-2 border-surface-edge bg-surface-raised px-3 text-lg text-ink focus:border-accent focus:outline-none focus:ring-[3px] focus:ring-accent/40 aria-[invalid=true]:border-verdict-out_of_band';
+
+/** The typed inputs a step asks for alongside its outcome. */
+export function StepInputFields({ inputs, values, errors, onChange, bandSets, renderPhotos, disabled }: StepInputFieldsProps) {
+  return (
+    <div className="space-y-4">
+      {inputs.map((input) => {
+        const label = input.required ? input.label : `${input.label} (optional)`;
+        if (input.type === 'photo') return <div key={input.key}>{renderPhotos(input.label)}</div>;
+        if (input.type === 'sensor_generation') {
+          return (
+            <Field key={input.key} label={label} error={errors[input.key]}>
+              <select className={selectClass} value={values[input.key] ?? ''} disabled={disabled} onChange={(e) => onChange(input.key, e.target.value)}>
+                <option value="">Not chosen</option>
+                {bandSets.map((b) => (
+                  <option key={b.generation} value={b.generation}>
+                    {b.label}
+                  </option>
+                ))}
+              </select>
+            </Field>
+          );
+        }
+        return (
+          <Field key={input.key} label={label} error={errors[input.key]}>
+            <TextInput
+              className="max-w-md"
+              inputMode={input.type === 'version' ? 'decimal' : undefined}
+              value={values[input.key] ?? ''}
+              disabled={disabled}
+              onChange={(e) => onChange(input.key, e.target.value)}
+            />
+          </Field>
+        );
+      })}
+    </div>
+  );
+}
