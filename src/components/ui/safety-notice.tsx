@@ -16,10 +16,15 @@ export const LOCKOUT_DEFERRAL =
 interface SafetyNoticeProps {
   level: SignalWord;
   children: ReactNode;
+  /** Set when the message itself already ends by deferring to the plant's procedure, so it is not said twice. */
+  defersAlready?: boolean;
 }
 
+/** True when a message already defers to the plant's lockout procedure, local codes and licensed practice. */
+export const defersToPlant = (text: string) => /lockout procedure, local codes and licensed practice/i.test(text);
+
 /** A safety message that always ends by deferring to the plant's own procedure. */
-export function SafetyNotice({ level, children }: SafetyNoticeProps) {
+export function SafetyNotice({ level, children, defersAlready = false }: SafetyNoticeProps) {
   const panel = PANELS[level];
   return (
     <section aria-label={`${level.toUpperCase()} safety notice`} className={cn('overflow-hidden rounded-lg border-2', panel.body)}>
@@ -32,7 +37,7 @@ export function SafetyNotice({ level, children }: SafetyNoticeProps) {
       </p>
       <div className="space-y-2 px-4 py-3 text-lg text-ink">
         <div>{children}</div>
-        <p className="font-medium">{LOCKOUT_DEFERRAL}</p>
+        {!defersAlready && <p className="font-medium">{LOCKOUT_DEFERRAL}</p>}
       </div>
     </section>
   );

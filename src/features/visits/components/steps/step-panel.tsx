@@ -2,7 +2,7 @@ import type { ReactNode } from 'react';
 import type { Step } from '@shared/schemas/procedure';
 import type { VisitDetail } from '@shared/schemas/visit-detail';
 import { Banner } from '@/components/ui/banner';
-import { SafetyNotice } from '@/components/ui/safety-notice';
+import { SafetyNotice, defersToPlant } from '@/components/ui/safety-notice';
 import { useAnswerStep } from '../../api/use-answer-step';
 import { currentResult, isVisitOpen, type PersonNames } from '../../lib/step-records';
 import { FindingView } from './finding-view';
@@ -53,7 +53,11 @@ export function StepPanel({ visit, step, names, onAnswered, renderPhotos }: Step
         </Banner>
       )}
       <p className="whitespace-pre-line text-lg text-ink">{step.instructions}</p>
-      {step.safety && <SafetyNotice level={step.safety.signalWord.toLowerCase() as 'danger' | 'warning' | 'caution'}>{step.safety.text}</SafetyNotice>}
+      {step.safety && (
+        <SafetyNotice level={step.safety.signalWord.toLowerCase() as 'danger' | 'warning' | 'caution'} defersAlready={defersToPlant(step.safety.text)}>
+          {step.safety.text}
+        </SafetyNotice>
+      )}
       {/* Keyed by the answer, so a new answer from the server resets the drafts to it; a measure step
           keeps its typed readings (and any save still waiting to be retried). */}
       <StepBody key={step.kind === 'measure' ? step.id : `${step.id}-${result?.id ?? 'none'}`} {...{ visit, step, result, answer, editable: editable && !noLongerApplies, names, photos }} />
