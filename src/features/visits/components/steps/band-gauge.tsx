@@ -105,25 +105,29 @@ export function BandGauge({ judgement, quantity, circuit, bands }: BandGaugeProp
           <span className="w-1 flex-1 bg-ink" />
         </div>
       </div>
-      <div aria-hidden="true" className="relative mt-1 h-6 text-sm text-ink-muted">
-        {[s.inLow, s.inHigh].map((v) => (
-          <span key={v} className="absolute -translate-x-1/2 whitespace-nowrap" style={at(v)}>
-            {fmt(v)}
-          </span>
-        ))}
-        {s.nominal !== null && (
+      {s.nominal !== null && (
+        <div aria-hidden="true" className="relative mt-1 h-6 text-sm">
           <span className="absolute -translate-x-1/2 whitespace-nowrap font-semibold text-ink" style={at(s.nominal)}>
             nom. {fmt(s.nominal)}
           </span>
-        )}
-      </div>
-      <div aria-hidden="true" className="relative h-6 text-sm text-ink-muted">
-        {[s.nearLow, s.nearHigh].map((v) => (
-          <span key={v} className="absolute -translate-x-1/2 whitespace-nowrap" style={at(v)}>
-            {fmt(v)}
-          </span>
-        ))}
-      </div>
+        </div>
+      )}
+      {/* Edge values under their ticks where there is room; on a phone they collide, so they are listed instead. */}
+      {[
+        [s.inLow, s.inHigh],
+        [s.nearLow, s.nearHigh],
+      ].map((pair, row) => (
+        <div key={row} aria-hidden="true" className="relative hidden h-6 text-sm text-ink-muted sm:block">
+          {pair.map((v) => (
+            <span key={v} className="absolute -translate-x-1/2 whitespace-nowrap" style={at(v)}>
+              {fmt(v)}
+            </span>
+          ))}
+        </div>
+      ))}
+      <p aria-hidden="true" className="mt-1 text-sm text-ink-muted sm:hidden">
+        in band {fmt(s.inLow)}–{fmt(s.inHigh)} · near edge {fmt(s.nearLow)}–{fmt(s.nearHigh)}
+      </p>
     </figure>
   );
 }
