@@ -1,5 +1,7 @@
 // `npm start`: private PostgreSQL, migrations, demo seed, client build, one Express process on PORT.
-import { spawn } from 'node:child_process';
+import { spawn, type ChildProcess } from 'node:child_process';
+import net from 'node:net';
+import path from 'node:path';
 import { DEMO_PASSWORD, DEMO_USERS } from '../server/db/seed/demo-data';
 import { createSequelize } from '../server/db/sequelize';
 import { seedDemo } from '../server/db/seed/seed-demo';
@@ -30,6 +32,8 @@ try {
   fail(`start failed: ${err instanceof Error ? err.message : String(err)}`);
 }
 
+const mail = await startMailCatcher();
+
 const server = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
   stdio: 'inherit',
   env: {
@@ -41,10 +45,13 @@ const server = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
     // Plain http on this machine: a Secure cookie would never come back. Set COOKIE_SECURE=true behind HTTPS.
     COOKIE_SECURE: process.env.COOKIE_SECURE ?? 'false',
     CLIENT_DIST: process.env.CLIENT_DIST ?? 'dist/client',
+    PUBLIC_BASE_URL: process.env.PUBLIC_BASE_URL ?? `http://127.0.0.1:${port}`,
+    ...mail.env,
   },
 });
 
 server.on('exit', (code) => {
+  mail.stop();
   stopCluster();
   if (!stopping) say(`server stopped (exit ${code ?? 'signal'})`);
   process.exit(code ?? 0);
@@ -63,6 +70,7 @@ const width = Math.max(...DEMO_USERS.map((u) => u.email.length));
 say(`Crankwise is running: http://127.0.0.1:${port}/`);
 say(`demo sign-ins (invented people), password for all: ${DEMO_PASSWORD}`);
 for (const u of DEMO_USERS) say(`  ${u.email.padEnd(width)}  ${u.role}`);
+if (mail.inboxUrl) say(`mail sent by Crankwise (visit reports) arrives in the local inbox: ${mail.inboxUrl}`);
 say('Ctrl-C stops the server and its database.');
 
 async function waitForHealth(healthUrl: string): Promise<void> {
@@ -75,4 +83,49 @@ async function waitForHealth(healthUrl: string): Promise<void> {
     await new Promise((r) => setTimeout(r, 200));
   }
   say('the server did not answer its health check within 20 s; see the log above');
+}
+
+function isFree(p: number): Promise<boolean> {
+  return new Promise((resolve) => {
+    const probe = net.createServer().once('error', () => resolve(false));
+    probe.listen(p, '127.0.0.1', () => probe.close(() => resolve(true)));
+  });
+}
+
+async function freePort(preferred: number): Promise<number> {
+  for (let p = preferred; p < preferred + 20; p++) if (await isFree(p)) return p;
+  throw new Error(`no free port between ${preferred} and ${preferred + 19}`);
+}
+
+/**
+ * A local mail catcher (maildev, SMTP and a web inbox on loopback) so the reports Crankwise sends can
+ * be read. Skipped when SMTP_HOST names a real server; if it fails, Crankwise still starts and its
+ * outbox keeps the mail until a server answers.
+ */
+async function startMailCatcher(): Promise<{ env: Record<string, string>; inboxUrl?: string; stop: () => void }> {
+  if (process.env.SMTP_HOST) return { env: {}, stop: () => {} };
+  let child: ChildProcess | undefined;
+  const stop = () => child?.kill('SIGTERM');
+  try {
+    const [smtpPort, webPort] = [await freePort(1025), await freePort(1080)];
+    const args = ['--smtp', String(smtpPort), '--ip', '127.0.0.1', '--web', String(webPort), '--web-ip', '127.0.0.1', '--hide-extensions', 'STARTTLS', '--mail-directory', path.resolve('.data/maildev')];
+    child = spawn(process.execPath, ['node_modules/maildev/dist/bin/maildev.js', ...args], { stdio: ['ignore', 'ignore', 'pipe'] });
+    let errors = '';
+    child.stderr?.on('data', (d: Buffer) => (errors += d.toString()));
+    const exited = new Promise<never>((_, reject) => child!.once('exit', (code) => reject(new Error(`maildev exited (${code ?? 'signal'}) ${errors.trim()}`))));
+    exited.catch(() => {});
+    const inboxUrl = `http://127.0.0.1:${webPort}/`;
+    for (let i = 0; ; i++) {
+      // The inbox page answers only browsers (Accept: text/html); its REST API answers anyone.
+      const up = await Promise.race([fetch(`${inboxUrl}api/email`).then((r) => r.ok, () => false), exited]);
+      if (up) break;
+      if (i >= 100) throw new Error('maildev did not answer within 20 s');
+      await new Promise((r) => setTimeout(r, 200));
+    }
+    return { env: { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(smtpPort), SMTP_SECURE: 'false' }, inboxUrl, stop };
+  } catch (err) {
+    stop();
+    say(`the local mail inbox did not start (${err instanceof Error ? err.message : String(err)}); reports stay queued in the outbox until a mail server answers`);
+    return { env: {}, stop: () => {} };
+  }
 }

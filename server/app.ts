@@ -12,11 +12,16 @@ import type { Env } from './config/env';
 import { initModels } from './db/models';
 import { errorHandler, unknownRoute } from './lib/errors';
 import { logger } from './lib/logger';
+import { adminRoutes } from './modules/admin/admin.routes';
+import { inviteRoutes } from './modules/admin/invites.routes';
 import { attachmentRoutes } from './modules/attachments/attachments.routes';
 import { DiskStorage } from './modules/attachments/storage';
 import { customerRoutes } from './modules/customers/customers.routes';
+import { emailRoutes } from './modules/emails/emails.routes';
 import { healthRoutes } from './modules/health/health.routes';
+import { managerRoutes } from './modules/manager/manager.routes';
 import { pressRoutes } from './modules/presses/presses.routes';
+import { reportRoutes } from './modules/reports/reports.routes';
 import { sessionRoutes } from './modules/session/session.routes';
 import { siteRoutes } from './modules/sites/sites.routes';
 import { visitRoutes } from './modules/visits/visits.routes';
@@ -76,6 +81,11 @@ export function createApp({ env, sequelize }: AppDeps): CrankwiseApp {
   api.use('/presses', pressRoutes());
   api.use('/visits/:visitId/attachments', attachmentRoutes({ storage: new DiskStorage(path.resolve(env.UPLOAD_DIR)), maxUploadBytes: env.UPLOAD_MAX_BYTES }));
   api.use('/visits', visitRoutes());
+  api.use('/admin', adminRoutes({ publicBaseUrl: env.PUBLIC_BASE_URL }));
+  api.use('/invites', inviteRoutes());
+  api.use('/manager', managerRoutes());
+  api.use('/emails', emailRoutes({ env }));
+  api.use('/report', reportRoutes({ env }));
   api.use(unknownRoute);
   app.use('/api', api);
 

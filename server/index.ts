@@ -3,6 +3,7 @@ import { loadEnv } from './config/env';
 import { createSequelize } from './db/sequelize';
 import { migrate } from './db/umzug';
 import { logger } from './lib/logger';
+import { startOutboxWorker } from './modules/emails/outbox';
 
 process.on('unhandledRejection', (reason) => {
   logger.error({ err: reason }, 'unhandled promise rejection');
@@ -21,10 +22,12 @@ const { app, close } = createApp({ env, sequelize });
 const server = app.listen(env.PORT, env.HOST, () => {
   logger.info(`Crankwise listening on http://${env.HOST}:${env.PORT}`);
 });
+const stopOutbox = startOutboxWorker({ pollMs: env.OUTBOX_POLL_MS });
 
 async function shutdown(signal: string) {
   logger.info({ signal }, 'shutting down');
   server.close();
+  await stopOutbox();
   await close();
   await sequelize.close();
   process.exit(0);

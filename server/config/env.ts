@@ -22,6 +22,34 @@ const envSchema = z.object({
   UPLOAD_DIR: z.string().min(1).default('.data/uploads'),
   /** Largest single photo accepted, in bytes (15 MiB by default: a full-resolution tablet photo fits). */
   UPLOAD_MAX_BYTES: z.coerce.number().int().min(1024).max(100 * 1024 * 1024).default(15 * 1024 * 1024),
+  /** Who the visit reports come from (report header, e-mail sender name). */
+  COMPANY_NAME: z.string().trim().min(2).max(120).default('Ridgeline Press Service (invented demo company)'),
+  /** Where customers reach this server: the start of the signed report links in e-mails. */
+  PUBLIC_BASE_URL: z.string().url('PUBLIC_BASE_URL must be a URL such as https://service.example.com').default('http://127.0.0.1:3000').transform((u) => u.replace(/\/+$/, '')),
+  SMTP_HOST: z.string().min(1).default('127.0.0.1'),
+  SMTP_PORT: z.coerce.number().int().min(1).max(65_535).default(1025),
+  /** true: TLS from the first byte (port 465); false: plain, upgraded with STARTTLS when the server offers it. */
+  SMTP_SECURE: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASS: z.string().optional(),
+  MAIL_FROM: z.string().min(3).default('Crankwise reports <reports@crankwise.invalid>'),
+  /** Key for the customers' signed report links; by default derived from SESSION_SECRET. */
+  REPORT_LINK_SECRET: z.string().min(32, 'REPORT_LINK_SECRET must be at least 32 characters').optional(),
+  REPORT_LINK_DAYS: z.coerce.number().int().min(1).max(366).default(30),
+  /** Time zone for dates printed in reports and e-mails (IANA name such as America/Chicago). */
+  REPORT_TIME_ZONE: z
+    .string()
+    .default('UTC')
+    .refine((tz) => {
+      try {
+        new Intl.DateTimeFormat('en-US', { timeZone: tz });
+        return true;
+      } catch {
+        return false;
+      }
+    }, 'REPORT_TIME_ZONE must be an IANA time zone such as America/Chicago or UTC'),
+  /** How often the outbox worker looks for e-mails due to be sent, in milliseconds. */
+  OUTBOX_POLL_MS: z.coerce.number().int().min(200).max(3_600_000).default(5000),
 });
 
 export type Env = z.infer<typeof envSchema>;

@@ -1,8 +1,11 @@
 import type { Sequelize } from 'sequelize';
+import { initUserInvite } from '../modules/admin/invite.model';
 import { Attachment, initAttachment } from '../modules/attachments/attachments.model';
 import { Customer, initCustomer } from '../modules/customers/customers.model';
+import { initEmailModels } from '../modules/emails/emails.model';
 import { initReferenceModels } from '../modules/reference/reference.model';
 import { Press, initPress } from '../modules/presses/presses.model';
+import { initReportIssue } from '../modules/reports/report-issues.model';
 import { Site, initSite } from '../modules/sites/sites.model';
 import { User, initUser } from '../modules/users/users.model';
 import { initVisitWorkModels } from '../modules/visits/visit-work.model';
@@ -21,6 +24,9 @@ export function initModels(sequelize: Sequelize): void {
   initReferenceModels(sequelize);
   initVisitWorkModels(sequelize);
   initAttachment(sequelize);
+  initUserInvite(sequelize);
+  initEmailModels(sequelize);
+  initReportIssue(sequelize);
 
   Customer.hasMany(Site, { as: 'sites', foreignKey: { name: 'customerId', allowNull: false } });
   Site.belongsTo(Customer, { as: 'customer', foreignKey: { name: 'customerId', allowNull: false } });

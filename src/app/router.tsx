@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { createBrowserRouter, Navigate, RouterProvider, type RouteObject } from 'react-router-dom';
 import { Spinner } from '@/components/ui/spinner';
 import { useSessionUser } from '@/features/session/hooks/use-session-user';
-import { ROLE_HOME, OFFICE_ROLES } from './access';
+import { ADMIN_ONLY, ROLE_HOME, OFFICE_ROLES } from './access';
 import { RequireRole } from './guards/require-role';
 import { RequireSession } from './guards/require-session';
 import { RouteErrorPage } from './routes/errors/route-error-page';
@@ -21,6 +21,16 @@ export const appRoutes: RouteObject[] = [
       {
         path: '/sign-in',
         lazy: async () => ({ Component: (await import('./routes/sign-in/sign-in-page')).SignInPage }),
+      },
+      // The customer's read-only report: a signed link from the e-mail, no account.
+      {
+        path: '/report/:token',
+        lazy: async () => ({ Component: (await import('./routes/report/report-page')).ReportPage }),
+      },
+      // An invited person sets their password here before they have an account to sign in with.
+      {
+        path: '/accept-invite/:token',
+        lazy: async () => ({ Component: (await import('./routes/invite/accept-invite-page')).AcceptInvitePage }),
       },
       {
         element: <RequireSession />,
@@ -52,6 +62,36 @@ export const appRoutes: RouteObject[] = [
               {
                 path: '/customers',
                 lazy: async () => ({ Component: (await import('./routes/customers/customers-page')).CustomersPage }),
+              },
+              { path: '/review', lazy: async () => ({ Component: (await import('./routes/manager/review-queue-page')).ReviewQueuePage }) },
+              { path: '/review/:id', lazy: async () => ({ Component: (await import('./routes/manager/visit-record-page')).VisitRecordPage }) },
+              { path: '/visits/all', lazy: async () => ({ Component: (await import('./routes/manager/all-visits-page')).AllVisitsPage }) },
+              { path: '/dashboard', lazy: async () => ({ Component: (await import('./routes/manager/dashboard-page')).DashboardPage }) },
+              {
+                path: '/presses/:id/history',
+                lazy: async () => ({ Component: (await import('./routes/manager/press-history-page')).PressHistoryPage }),
+              },
+              { path: '/admin', lazy: async () => ({ Component: (await import('./routes/admin/admin-home-page')).AdminHomePage }) },
+              {
+                path: '/admin/customers',
+                lazy: async () => ({ Component: (await import('./routes/admin/directory-customers-page')).DirectoryCustomersPage }),
+              },
+              { path: '/admin/sites', lazy: async () => ({ Component: (await import('./routes/admin/directory-sites-page')).DirectorySitesPage }) },
+              {
+                path: '/admin/presses',
+                lazy: async () => ({ Component: (await import('./routes/admin/directory-presses-page')).DirectoryPressesPage }),
+              },
+            ],
+          },
+          {
+            element: <RequireRole roles={ADMIN_ONLY} />,
+            children: [
+              { path: '/admin/users', lazy: async () => ({ Component: (await import('./routes/admin/users-page')).UsersPage }) },
+              { path: '/admin/band-sets', lazy: async () => ({ Component: (await import('./routes/admin/band-sets-page')).BandSetsPage }) },
+              { path: '/admin/procedures', lazy: async () => ({ Component: (await import('./routes/admin/procedures-page')).ProceduresPage }) },
+              {
+                path: '/admin/firmware-rules',
+                lazy: async () => ({ Component: (await import('./routes/admin/firmware-rules-page')).FirmwareRulesPage }),
               },
             ],
           },

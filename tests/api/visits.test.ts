@@ -209,3 +209,20 @@ describe('closing, review and reopening', () => {
     expect(actions).toEqual(expect.arrayContaining(['visit_started', 'safety_gate_confirmed', 'reading_saved', 'visit_closed', 'visit_returned', 'visit_reopened', 'visit_approved']));
   });
 });
+
+describe('band-set versions', () => {
+  it('keeps the version a visit started with when the generation is confirmed after a newer one is published', async () => {
+    const v = await startVisit();
+    const pinned = (await tech.get(`/api/visits/${v.id}`)).body.bandSet;
+    expect(pinned).toMatchObject({ generation: 'test-gen', version: 1 });
+    const { BandSetVersion } = await import('../../server/modules/reference/reference.model');
+    const v1 = await BandSetVersion.findByPk(pinned.id);
+    await BandSetVersion.create({ generation: 'test-gen', version: 2, label: 'v2 (test)', bands: v1!.bands, publishedAt: new Date(), createdBy: null });
+
+    await workToResistanceStep(tech, v.id); // answers identify-generation with sensor_generation 'test-gen'
+    const after = (await tech.get(`/api/visits/${v.id}`)).body.bandSet;
+    expect(after).toMatchObject({ id: pinned.id, version: 1 });
+    const fresh = await startVisit();
+    expect((await tech.get(`/api/visits/${fresh.id}`)).body.bandSet.version).toBe(2);
+  });
+});

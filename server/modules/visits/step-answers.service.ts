@@ -26,6 +26,8 @@ function assertReachable(ctx: VisitContext, stepId: string): void {
 }
 
 async function pinGeneration(ctx: VisitContext, generation: string, transaction: Transaction): Promise<void> {
+  // A visit keeps the band-set version it started judging with; only a different generation re-pins.
+  if (ctx.bandSet?.generation === generation) return;
   const bandSet = await latestPublishedBandSet(generation, transaction);
   if (!bandSet) throw invalid('inputs.sensor_generation', `No published band set for generation "${generation}". Pick one from the list.`);
   if (ctx.visit.bandSetId === bandSet.id) return;

@@ -3,6 +3,7 @@ import type { CloseOutInput } from '../../../shared/schemas/visit';
 import { AppError } from '../../lib/errors';
 import { audit } from '../audit/audit';
 import { storeSignature } from '../attachments/attachments.service';
+import { enqueueVisitReport } from '../reports/reports.service';
 import { loadVisitForRead, loadVisitForWrite, visitReference } from './visit-access';
 import { loadVisitContext } from './visit-context';
 import { traverse } from './visit-state';
@@ -60,6 +61,8 @@ export async function closeVisit(user: SessionUser, visitId: number, input: Clos
       { visitId, actorId: user.id, action: 'visit_closed', detail: { finding: traversal.findings[0]!.id, causeCategory: input.causeCategory, signatureAttachmentId: signature.id } },
       transaction,
     );
+    // The report e-mail is queued with the close itself: committed together, or not at all.
+    await enqueueVisitReport(visitId, transaction, user.id);
   });
   return getVisitDetail(user, visitId);
 }

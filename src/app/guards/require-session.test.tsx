@@ -51,7 +51,7 @@ describe('Sign-in guard and role access', () => {
 
     expect(await screen.findByRole('heading', { level: 1, name: 'Page not found' })).toBeInTheDocument();
     expect(screen.getByText(/There is no page at \/no-such-page/)).toBeInTheDocument();
-    expect(screen.getByRole('link', { name: 'Go to your start page' })).toHaveAttribute('href', '/presses');
+    expect(screen.getByRole('link', { name: 'Go to your start page' })).toHaveAttribute('href', '/review');
   });
 
   it('signs out and returns to the sign-in page', async () => {

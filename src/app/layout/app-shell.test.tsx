@@ -23,12 +23,22 @@ describe('Role-aware shell', () => {
     expect(await openPressesAs(technician)).toEqual(['My visits', 'Presses']);
   });
 
-  it('gives a service manager their own visits, presses and customers', async () => {
-    expect(await openPressesAs(manager)).toEqual(['My visits', 'Presses', 'Customers']);
+  it('gives a service manager the review queue, all visits, figures, their own visits, presses and administration', async () => {
+    expect(await openPressesAs(manager)).toEqual(['Review queue', 'All visits', 'Dashboard', 'My visits', 'Presses', 'Administration']);
   });
 
-  it('gives an administrator their own visits, presses and customers', async () => {
-    expect(await openPressesAs(admin)).toEqual(['My visits', 'Presses', 'Customers']);
+  it('gives an administrator the same office links', async () => {
+    expect(await openPressesAs(admin)).toEqual(['Review queue', 'All visits', 'Dashboard', 'My visits', 'Presses', 'Administration']);
+  });
+
+  it('marks only the most specific link as current: All visits, not also My visits', async () => {
+    mockApi({
+      'GET /api/session': { status: 200, body: { user: manager } },
+    });
+    renderApp('/visits/all');
+    const nav = await screen.findByRole('navigation', { name: 'Main' });
+    expect(within(nav).getByRole('link', { name: 'All visits' })).toHaveAttribute('aria-current', 'page');
+    expect(within(nav).getByRole('link', { name: 'My visits' })).not.toHaveAttribute('aria-current');
   });
 
   it("shows who is signed in, in what role, and marks the current page", async () => {

@@ -55,14 +55,13 @@ describe('Sign-in page', () => {
     expect(router.state.location.pathname + router.state.location.search).toBe('/customers?q=north');
   });
 
-  it('sends someone already signed in straight on', async () => {
+  it('sends someone already signed in straight on, a manager to the review queue', async () => {
     mockApi({
       'GET /api/session': { status: 200, body: { user: manager } },
-      'GET /api/presses': { status: 200, body: pageOf([]) },
+      'GET /api/manager/visits': { status: 200, body: { ...pageOf([]), rows: [] } },
     });
     const { router } = renderApp('/sign-in');
 
-    expect(await screen.findByRole('heading', { level: 1, name: 'Presses' })).toBeInTheDocument();
-    expect(router.state.location.pathname).toBe('/presses');
+    await waitFor(() => expect(router.state.location.pathname).toBe('/review'));
   });
 });

@@ -1,0 +1,71 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+
+export const EMAIL_STATUSES = ['queued', 'sending', 'sent', 'failed'] as const;
+export type EmailStatus = (typeof EMAIL_STATUSES)[number];
+
+/** One message in the outbox: queued → sending → sent, or back to queued with a later try, or failed. */
+export class Email extends Model<InferAttributes<Email>, InferCreationAttributes<Email>> {
+  declare id: CreationOptional<number>;
+  declare visitId: number | null;
+  declare kind: string;
+  declare toAddress: string;
+  declare subject: string;
+  declare html: string;
+  declare text: string;
+  declare status: CreationOptional<EmailStatus>;
+  declare attempts: CreationOptional<number>;
+  declare lastError: CreationOptional<string | null>;
+  declare nextAttemptAt: CreationOptional<Date>;
+  declare sentAt: CreationOptional<Date | null>;
+  declare messageId: CreationOptional<string | null>;
+  declare createdBy: number | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+  declare attachments?: NonAttribute<EmailAttachment[]>;
+}
+
+/** A file sent with a message, stored so the record holds exactly what went out. */
+export class EmailAttachment extends Model<InferAttributes<EmailAttachment>, InferCreationAttributes<EmailAttachment>> {
+  declare id: CreationOptional<number>;
+  declare emailId: number;
+  declare filename: string;
+  declare contentType: string;
+  declare content: Buffer;
+  declare createdAt: CreationOptional<Date>;
+}
+
+export function initEmailModels(sequelize: Sequelize): void {
+  Email.init(
+    {
+      id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
+      visitId: { type: DataTypes.INTEGER, allowNull: true },
+      kind: { type: DataTypes.TEXT, allowNull: false },
+      toAddress: { type: DataTypes.TEXT, allowNull: false },
+      subject: { type: DataTypes.TEXT, allowNull: false },
+      html: { type: DataTypes.TEXT, allowNull: false },
+      text: { type: DataTypes.TEXT, allowNull: false },
+      status: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'queued' },
+      attempts: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+      lastError: { type: DataTypes.TEXT, allowNull: true, defaultValue: null },
+      nextAttemptAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
+      sentAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
+      messageId: { type: DataTypes.TEXT, allowNull: true, defaultValue: null },
+      createdBy: { type: DataTypes.INTEGER, allowNull: true },
+      createdAt: DataTypes.DATE,
+      updatedAt: DataTypes.DATE,
+    },
+    { sequelize, tableName: 'emails' },
+  );
+  EmailAttachment.init(
+    {
+      id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
+      emailId: { type: DataTypes.INTEGER, allowNull: false },
+      filename: { type: DataTypes.TEXT, allowNull: false },
+      contentType: { type: DataTypes.TEXT, allowNull: false },
+      content: { type: DataTypes.BLOB, allowNull: false },
+      createdAt: DataTypes.DATE,
+    },
+    { sequelize, tableName: 'email_attachments', updatedAt: false },
+  );
+  Email.hasMany(EmailAttachment, { as: 'attachments', foreignKey: 'emailId' });
+}

@@ -1,0 +1,61 @@
+import { Router } from 'express';
+import { idParamSchema } from '../../../shared/schemas/common';
+import { figuresQuerySchema } from '../../../shared/schemas/manager-figures';
+import { visitTableFilterSchema, visitTableQuerySchema } from '../../../shared/schemas/visit-table';
+import { OFFICE_ROLES, requireRole } from '../../auth/require-role';
+import { logger } from '../../lib/logger';
+import { valid, validate } from '../../lib/validate';
+import { managerFigures } from './figures.service';
+import { auditTrail, technicianOptions, visitTable } from './manager.service';
+import { pressHistory } from './press-history.service';
+import { visitCsvChunks } from './visit-export';
+
+/** The service manager's screens: all visits, the export, figures, press history, a visit's audit trail. */
+export function managerRoutes(): Router {
+  const router = Router();
+  router.use(requireRole(...OFFICE_ROLES));
+  const id = validate('params', idParamSchema);
+
+  router.get('/visits', validate('query', visitTableQuerySchema), async (req, res) => {
+    res.json(await visitTable(valid(req, 'query', visitTableQuerySchema)));
+  });
+
+  // Streamed: each batch is written as it arrives, and writing waits while the client catches up.
+  router.get('/visits/export.csv', validate('query', visitTableFilterSchema), async (req, res) => {
+    const filter = valid(req, 'query', visitTableFilterSchema);
+    const day = new Date().toISOString().slice(0, 10);
+    res.setHeader('Content-Type', 'text/csv; charset=utf-8');
+    res.setHeader('Content-Disposition', `attachment; filename="crankwise-visits-${day}.csv"`);
+    res.setHeader('Cache-Control', 'no-store');
+    try {
+      for await (const chunk of visitCsvChunks(filter)) {
+        if (res.destroyed) return; // the person cancelled the download: stop querying
+        if (!res.write(chunk)) await new Promise<void>((resolve) => res.once('drain', resolve).once('close', resolve));
+      }
+      res.end();
+    } catch (err) {
+      if (!res.headersSent) throw err;
+      // Half a file must not look like a whole one: once rows are sent, only a cut connection says "failed".
+      logger.error({ err }, 'visit export failed part-way');
+      res.destroy(err as Error);
+    }
+  });
+
+  router.get('/visits/:id/audit', id, async (req, res) => {
+    res.json(await auditTrail(req.user!, valid(req, 'params', idParamSchema).id));
+  });
+
+  router.get('/technicians', async (_req, res) => {
+    res.json({ items: await technicianOptions() });
+  });
+
+  router.get('/figures', validate('query', figuresQuerySchema), async (req, res) => {
+    res.json(await managerFigures(valid(req, 'query', figuresQuerySchema)));
+  });
+
+  router.get('/presses/:id/history', id, async (req, res) => {
+    res.json(await pressHistory(valid(req, 'params', idParamSchema).id));
+  });
+
+  return router;
+}

@@ -1,0 +1,18 @@
+import type { SessionUser } from '../../../shared/schemas/session';
+import type { VisitTablePage, VisitTableQuery } from '../../../shared/schemas/visit-table';
+import { loadVisitForRead } from '../visits/visit-access';
+import { findAuditTrail, findTechnicianOptions } from './manager.repository';
+import { countVisits, findVisitPage } from './visit-table.repository';
+
+export async function visitTable(q: VisitTableQuery): Promise<VisitTablePage> {
+  const [items, total] = await Promise.all([findVisitPage(q), countVisits(q)]);
+  return { items, total, page: q.page, pageSize: q.pageSize, sort: q.sort, dir: q.dir };
+}
+
+export const technicianOptions = () => findTechnicianOptions();
+
+/** The visit's audit trail; the visit's own access rule decides who may read it (404 when unknown). */
+export async function auditTrail(user: SessionUser, visitId: number) {
+  await loadVisitForRead(user, visitId);
+  return { items: await findAuditTrail(visitId) };
+}

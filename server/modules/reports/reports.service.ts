@@ -1,0 +1,152 @@
+import { Op, type Transaction } from 'sequelize';
+import { AppError } from '../../lib/errors';
+import { audit } from '../audit/audit';
+import { Attachment } from '../attachments/attachments.model';
+import type { FileStorage } from '../attachments/storage';
+import { Email } from '../emails/emails.model';
+import { enqueueEmail } from '../emails/outbox';
+import { Visit } from '../visits/visits.model';
+import { visitIncludes } from '../visits/visits.service';
+import { buildReportView } from './report-data';
+import { reportEmailHtml, reportEmailText, reportSubject } from './report-email';
+import { reportFileName } from './report-format';
+import { ReportIssue } from './report-issues.model';
+import { newLinkNonce, readReportLink, signReportLink, verifyReportLink } from './report-link';
+import { renderReportPdf, type ReportImages } from './report-pdf';
+import type { ReportView } from './report-view';
+
+export interface ReportSettings {
+  companyName: string;
+  publicBaseUrl: string;
+  linkKey: Buffer;
+  linkDays: number;
+  timeZone: string;
+  storage: FileStorage;
+}
+
+let configured: ReportSettings | undefined;
+
+/** Sets who the reports come from, where links point and where the pictures are (once, when the app is built). */
+export function configureReports(settings: ReportSettings): void {
+  configured = settings;
+}
+
+function settings(): ReportSettings {
+  if (!configured) throw new Error('reports are not configured: build the app with createApp() (or call configureReports) first');
+  return configured;
+}
+
+async function readFile(storage: FileStorage, key: string | null): Promise<Buffer | null> {
+  if (!key) return null;
+  const file = await storage.get(key);
+  if (!file) return null;
+  const chunks: Buffer[] = [];
+  for await (const chunk of file.body) chunks.push(chunk as Buffer);
+  return Buffer.concat(chunks);
+}
+
+function imagesOf(visitId: number, transaction?: Transaction): ReportImages {
+  const { storage } = settings();
+  const find = (id: string) => Attachment.findOne({ where: { id, visitId }, transaction });
+  return {
+    photoThumb: async (id) => readFile(storage, (await find(id))?.thumbKey ?? null),
+    signature: async (id) => readFile(storage, (await find(id))?.storageKey ?? null),
+  };
+}
+
+export const reportLinkUrl = (token: string) => `${settings().publicBaseUrl}/report/${token}`;
+
+/**
+ * Queues the report e-mail of a visit that is being closed, inside the caller's transaction: a new
+ * issue (with a fresh link nonce), the PDF as it stands at this close, and the message in the outbox.
+ * A second close after a manager returned the visit sends a corrected report and retires the older link.
+ */
+export async function enqueueVisitReport(visitId: number, transaction: Transaction, actorId: number | null = null): Promise<{ email: Email; issue: ReportIssue; link: string }> {
+  const s = settings();
+  const visit = (await Visit.findByPk(visitId, { include: visitIncludes, transaction }))!;
+  const to = visit.contactEmail ?? visit.press?.site?.customer?.contactEmail ?? null;
+  if (!to) throw new AppError(400, 'invalid_input', 'Some fields need attention.', { contactEmail: 'Enter the e-mail address the report goes to' });
+
+  const previous: number = (await ReportIssue.max('issueNumber', { where: { visitId }, transaction })) ?? 0;
+  // Whole seconds: the link carries the expiry in seconds and must match what is stored.
+  const expiresAt = new Date(Math.floor(Date.now() / 1000 + s.linkDays * 86_400) * 1000);
+  const nonce = newLinkNonce();
+  const issue = await ReportIssue.create({ visitId, issueNumber: previous + 1, nonce, recipient: to, emailId: null, expiresAt, createdBy: actorId }, { transaction });
+  const token = signReportLink(s.linkKey, { visitId, issueNumber: issue.issueNumber, expiresAt: expiresAt.getTime() / 1000 }, nonce);
+  const link = reportLinkUrl(token);
+
+  const view = await buildReportView(visitId, { companyName: s.companyName, issue, transaction });
+  const pdf = await renderReportPdf(view, imagesOf(visitId, transaction), s.timeZone);
+  const context = { view, link, timeZone: s.timeZone };
+  const email = await enqueueEmail(
+    {
+      visitId,
+      kind: 'visit_report',
+      to,
+      subject: reportSubject(view),
+      html: reportEmailHtml(context),
+      text: reportEmailText(context),
+      attachments: [{ filename: reportFileName(view), contentType: 'application/pdf', content: pdf }],
+      createdBy: actorId,
+    },
+    transaction,
+  );
+  await issue.update({ emailId: email.id }, { transaction });
+
+  // An earlier report still waiting in the outbox carries a link that no longer opens: do not send it.
+  const [replaced] = await Email.update(
+    { status: 'failed', lastError: `Not sent: replaced by the corrected report (e-mail ${email.id}) before it went out.` },
+    { where: { visitId, kind: 'visit_report', status: 'queued', id: { [Op.ne]: email.id } }, transaction },
+  );
+  await audit({ visitId, actorId, action: 'report_queued', detail: { emailId: email.id, issue: issue.issueNumber, to, replacedUnsent: replaced } }, transaction);
+  return { email, issue, link };
+}
+
+/** The same answer for every bad link, so a guess learns nothing about any visit. */
+function refusal(): AppError {
+  return new AppError(404, 'report_link_invalid', `This report link has expired or is not valid. Ask ${settings().companyName} to send it again.`);
+}
+
+/** The newest issue of a visit that the link was signed for, or the refusal. */
+async function resolveLink(token: string, transaction?: Transaction): Promise<ReportIssue> {
+  const claims = readReportLink(token);
+  if (!claims) throw refusal();
+  const latest = await ReportIssue.findOne({ where: { visitId: claims.visitId }, order: [['issueNumber', 'DESC']], transaction, lock: transaction?.LOCK.UPDATE });
+  if (!latest || latest.issueNumber !== claims.issueNumber || !verifyReportLink(settings().linkKey, token, latest.nonce)) throw refusal();
+  const visit = await Visit.findByPk(claims.visitId, { attributes: ['id', 'status'], transaction });
+  // A visit returned for correction is not shown until its corrected report is issued.
+  if (!visit || !['closed', 'approved'].includes(visit.status)) throw refusal();
+  return latest;
+}
+
+export async function getPublicReport(token: string): Promise<ReportView> {
+  const issue = await resolveLink(token);
+  return buildReportView(issue.visitId, { companyName: settings().companyName, issue });
+}
+
+export async function getPublicReportPdf(token: string): Promise<{ fileName: string; pdf: Buffer }> {
+  const issue = await resolveLink(token);
+  const view = await buildReportView(issue.visitId, { companyName: settings().companyName, issue });
+  return { fileName: reportFileName(view), pdf: await renderReportPdf(view, imagesOf(issue.visitId), settings().timeZone) };
+}
+
+/** A thumbnail of one of the visit's own pictures (photos and the signature), nothing else. */
+export async function getPublicThumb(token: string, attachmentId: string): Promise<Buffer> {
+  const issue = await resolveLink(token);
+  const row = await Attachment.findOne({ where: { id: attachmentId, visitId: issue.visitId } });
+  const bytes = await readFile(settings().storage, row?.thumbKey ?? null);
+  if (!bytes) throw new AppError(404, 'not_found', 'This picture is not part of the report.');
+  return bytes;
+}
+
+/** Records that the contact received the report; a second acknowledgement keeps the first. */
+export async function acknowledgeReport(token: string, name: string | undefined): Promise<NonNullable<ReportView['acknowledgement']>> {
+  return Visit.sequelize!.transaction(async (transaction) => {
+    const issue = await resolveLink(token, transaction);
+    if (!issue.acknowledgedAt) {
+      await issue.update({ acknowledgedAt: new Date(), acknowledgedBy: name ?? null }, { transaction });
+      await audit({ visitId: issue.visitId, actorId: null, action: 'report_acknowledged', detail: { issue: issue.issueNumber, by: name ?? null } }, transaction);
+    }
+    return { at: issue.acknowledgedAt!.toISOString(), by: issue.acknowledgedBy };
+  });
+}

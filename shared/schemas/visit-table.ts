@@ -1,0 +1,101 @@
+import { z } from 'zod';
+import type { Page } from './common';
+import { causeCategorySchema, type CauseCategory } from './reading';
+import { visitStatusSchema, type VisitStatus } from './visit';
+
+// The manager's table of all visits: one query shape for the screen, the CSV export and the
+// review queue, so the export always holds exactly the rows the filters show.
+
+/** Columns the table may sort by; the server maps each to a fixed SQL expression. */
+export const VISIT_TABLE_SORTS = ['reference', 'startedAt', 'closedAt', 'status', 'customer', 'site', 'press', 'technician', 'cause', 'repairMinutes'] as const;
+export type VisitTableSort = (typeof VISIT_TABLE_SORTS)[number];
+export const VISIT_TABLE_MAX_PAGE_SIZE = 100;
+
+const isoDate = z
+  .string()
+  .regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date such as 2026-03-31')
+  .refine((s) => !Number.isNaN(Date.parse(`${s}T00:00:00Z`)), 'That date does not exist');
+
+/** An IANA time zone such as Europe/Berlin: day and month boundaries are the office's, not the server's. */
+export const timeZoneSchema = z
+  .string()
+  .max(64)
+  .refine((tz) => {
+    try {
+      new Intl.DateTimeFormat('en', { timeZone: tz });
+      return true;
+    } catch {
+      return false;
+    }
+  }, 'Unknown time zone');
+
+const id = z.coerce.number().int().positive();
+/** `status=closed,returned` in the address: one parameter, comma-separated. */
+const statusList = z
+  .string()
+  .transform((s) => s.split(',').map((part) => part.trim()).filter(Boolean))
+  .pipe(z.array(visitStatusSchema).max(5));
+
+const filterShape = {
+  status: statusList.optional(),
+  customerId: id.optional(),
+  siteId: id.optional(),
+  pressId: id.optional(),
+  technicianId: id.optional(),
+  cause: causeCategorySchema.optional(),
+  /** Visit start date range, inclusive, in the office's time zone. */
+  from: isoDate.optional(),
+  to: isoDate.optional(),
+  q: z.string().trim().max(100).optional(),
+  tz: timeZoneSchema.default('UTC'),
+};
+
+const datesInOrder = (v: { from?: string; to?: string }) => !v.from || !v.to || v.from <= v.to;
+const datesMessage = { message: 'The "from" date must be on or before the "to" date', path: ['to'] };
+
+export const visitTableFilterSchema = z.object(filterShape).refine(datesInOrder, datesMessage);
+export type VisitTableFilter = z.infer<typeof visitTableFilterSchema>;
+
+export const visitTableQuerySchema = z
+  .object({
+    ...filterShape,
+    sort: z.enum(VISIT_TABLE_SORTS, 'Sort by one of the table columns').default('startedAt'),
+    dir: z.enum(['asc', 'desc']).default('desc'),
+    page: z.coerce.number().int().min(1).default(1),
+    pageSize: z.coerce.number().int().min(1).max(VISIT_TABLE_MAX_PAGE_SIZE, `At most ${VISIT_TABLE_MAX_PAGE_SIZE} rows per page`).default(25),
+  })
+  .refine(datesInOrder, datesMessage);
+export type VisitTableQuery = z.infer<typeof visitTableQuerySchema>;
+
+export interface VisitTableRow {
+  id: number;
+  reference: string;
+  status: VisitStatus;
+  startedAt: string | null;
+  closedAt: string | null;
+  faultDisplayed: string;
+  causeCategory: CauseCategory | null;
+  customer: { id: number; name: string };
+  site: { id: number; name: string };
+  press: { id: number; assetTag: string; model: string };
+  technician: { id: number; name: string };
+  labourMinutes: number | null;
+  travelMinutes: number | null;
+  /** closedAt − startedAt in whole minutes; null until the visit is closed. */
+  repairMinutes: number | null;
+  /** Current readings judged out of band, open or short. */
+  failedReadings: number;
+  nearEdgeReadings: number;
+}
+
+export interface VisitTablePage extends Page<VisitTableRow> {
+  sort: VisitTableSort;
+  dir: 'asc' | 'desc';
+}
+
+/** People who may be assigned visits, for the technician filter. */
+export interface TechnicianOption {
+  id: number;
+  name: string;
+  active: boolean;
+}

@@ -1,0 +1,55 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm } from 'react-hook-form';
+import type { z } from 'zod';
+import { customerInputSchema, type Customer, type CustomerInput } from '@shared/schemas/customer';
+import { Field } from '@/components/ui/field';
+import { TextInput } from '@/components/ui/text-input';
+import { useSaveRecord } from '../api/directory-queries';
+import { RecordForm } from './record-form';
+import { applyServerFieldErrors } from './server-field-errors';
+
+type Fields = z.input<typeof customerInputSchema>;
+const NAMES = ['name', 'contactName', 'contactEmail', 'contactPhone', 'notes'] as const;
+
+export function CustomerForm({ customer, onDone }: { customer: Customer | null; onDone: () => void }) {
+  const save = useSaveRecord('customers');
+  const { register, handleSubmit, setError, formState: { errors } } = useForm<Fields, unknown, CustomerInput>({
+    resolver: zodResolver(customerInputSchema),
+    defaultValues: {
+      name: customer?.name ?? '',
+      contactName: customer?.contactName ?? '',
+      contactEmail: customer?.contactEmail ?? '',
+      contactPhone: customer?.contactPhone ?? '',
+      notes: customer?.notes ?? '',
+    },
+  });
+  const onSubmit = handleSubmit(async (values) => {
+    try {
+      await save.mutateAsync({ id: customer?.id ?? null, values });
+      onDone();
+    } catch (error) {
+      applyServerFieldErrors(error, setError, NAMES);
+    }
+  });
+  return (
+    <RecordForm title={customer ? `Edit ${customer.name}` : 'Add a customer'} onSubmit={() => void onSubmit()} onCancel={onDone} busy={save.isPending} error={save.error}>
+      <Field label="Customer name" error={errors.name?.message}>
+        <TextInput {...register('name')} />
+      </Field>
+      <div className="grid gap-4 md:grid-cols-3">
+        <Field label="Contact name" error={errors.contactName?.message}>
+          <TextInput {...register('contactName')} />
+        </Field>
+        <Field label="Contact e-mail" hint="Visit reports are sent here" error={errors.contactEmail?.message}>
+          <TextInput type="email" inputMode="email" autoCapitalize="none" {...register('contactEmail')} />
+        </Field>
+        <Field label="Contact phone" error={errors.contactPhone?.message}>
+          <TextInput type="tel" {...register('contactPhone')} />
+        </Field>
+      </div>
+      <Field label="Notes" hint="Gate codes, opening hours, who to ask for" error={errors.notes?.message}>
+        <TextInput {...register('notes')} />
+      </Field>
+    </RecordForm>
+  );
+}

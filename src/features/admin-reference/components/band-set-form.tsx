@@ -1,0 +1,104 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useForm, useWatch, type Control, type FieldPath } from 'react-hook-form';
+import type { BandSetVersionRecord } from '@shared/schemas/admin-reference';
+import { bandSetValuesSchema, type BandSetValues } from '@shared/schemas/band-set';
+import { CIRCUITS } from '@shared/schemas/reading';
+import { Banner } from '@/components/ui/banner';
+import { Button } from '@/components/ui/button';
+import { Field } from '@/components/ui/field';
+import { TextInput } from '@/components/ui/text-input';
+import { errorMessage, isApiError } from '@/lib/api-error';
+import { useSaveBandSetDraft } from '../api/band-set-queries';
+import { FORM_MESSAGES } from '../lib/form-messages';
+import { JudgementPreview } from './judgement-preview';
+import { NumberField } from './number-field';
+import { VoltageRangeFields } from './voltage-range-fields';
+import { WindingBandFields } from './winding-band-fields';
+
+/** Watches the form on its own, so typing re-renders only the preview, not every field. */
+function LivePreview({ control }: { control: Control<BandSetValues> }) {
+  return <JudgementPreview bands={useWatch({ control })} />;
+}
+
+interface BandSetFormProps {
+  record: BandSetVersionRecord;
+  /** Published versions are shown read-only: they are what visits ran with. */
+  editable: boolean;
+}
+
+/** The values of one band-set version; a draft can be edited and saved, and tried in the preview box. */
+export function BandSetForm({ record, editable }: BandSetFormProps) {
+  const save = useSaveBandSetDraft();
+  const {
+    register,
+    handleSubmit,
+    control,
+    setError,
+    formState: { errors, isDirty },
+    reset,
+  } = useForm<BandSetValues>({ resolver: zodResolver(bandSetValuesSchema, FORM_MESSAGES), defaultValues: record.bands, mode: 'onBlur' });
+  const num = { valueAsNumber: true } as const;
+
+  const onSubmit = handleSubmit(async (bands) => {
+    try {
+      const saved = await save.mutateAsync({ id: record.id, bands });
+      reset(saved.bands);
+    } catch (error) {
+      if (!isApiError(error)) return;
+      for (const [path, message] of Object.entries(error.fields)) {
+        setError(path.replace(/^bands\./, '') as FieldPath<BandSetValues>, { message });
+      }
+    }
+  });
+
+  return (
+    <div className="grid gap-6 xl:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
+      <form onSubmit={onSubmit} noValidate className="space-y-6" aria-label={`Band set ${record.generation} version ${record.version}`}>
+        {save.isError && (
+          <Banner tone="error" role="alert" title="The draft was not saved">
+            {errorMessage(save.error)}
+          </Banner>
+        )}
+        {save.isSuccess && !isDirty && (
+          <Banner role="status" title="Draft saved">
+            Publish it when the values are checked; visits keep using the current version until then.
+          </Banner>
+        )}
+        {/* A disabled fieldset makes a published version read-only while the preview still reads its values. */}
+        <fieldset disabled={!editable} className="space-y-6">
+        <Field label="Label" error={errors.label?.message}>
+          <TextInput {...register('label')} />
+        </Field>
+        <div className="grid gap-4 sm:grid-cols-2">
+          <NumberField label="Reference temperature" unit="°C" hint="Readings are corrected to this winding temperature" error={errors.referenceTemperatureC?.message} registration={register('referenceTemperatureC', num)} />
+          <NumberField label="Stator balance limit" unit="%" hint="Flag stators that differ by more than this" error={errors.statorBalancePercent?.message} registration={register('statorBalancePercent', num)} />
+        </div>
+        {CIRCUITS.map((circuit) => (
+          <WindingBandFields key={circuit} circuit={circuit} register={register} errors={errors} />
+        ))}
+        <VoltageRangeFields name="excitation" title="Excitation voltage (R1–R2)" register={register} errors={errors} />
+        <VoltageRangeFields name="statorOutputMagnitude" title="Stator output magnitude √(S1² + S2²)" register={register} errors={errors} />
+        <label className="flex min-h-touch items-center gap-3 text-lg text-ink">
+          <input type="checkbox" className="h-6 w-6" {...register('invented')} />
+          These are invented demo values, not a manufacturer’s figures
+        </label>
+        <Field label="Note" hint="Where the values come from" error={errors.note?.message}>
+          <textarea
+            rows={3}
+            className="block w-full rounded-lg border-2 border-surface-edge bg-surface-raised p-3 text-lg text-ink focus:border-accent focus:outline-none focus:ring-[3px] focus:ring-accent/40"
+            {...register('note')}
+          />
+        </Field>
+        </fieldset>
+        {editable && (
+          <Button type="submit" size="lg" disabled={save.isPending}>
+            {save.isPending ? 'Saving…' : 'Save draft'}
+          </Button>
+        )}
+      </form>
+      <div>
+        <LivePreview control={control} />
+      </div>
+    </div>
+  );
+}

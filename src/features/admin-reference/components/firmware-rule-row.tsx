@@ -1,0 +1,65 @@
+import { get, type FieldErrors, type UseFormRegister } from 'react-hook-form';
+import type { FirmwareRulesDraftInput } from '@shared/schemas/admin-reference';
+import { Button } from '@/components/ui/button';
+import { cn } from '@/lib/cn';
+
+const cell = 'block min-h-touch w-full rounded-md border-2 border-surface-edge bg-surface-raised px-2 text-lg text-ink aria-[invalid=true]:border-verdict-out_of_band focus:border-accent focus:outline-none';
+const blankIsUnset = (v: unknown) => (typeof v === 'string' && v.trim() === '' ? undefined : typeof v === 'string' ? v.trim() : v);
+
+interface Props {
+  index: number;
+  register: UseFormRegister<FirmwareRulesDraftInput>;
+  errors: FieldErrors<FirmwareRulesDraftInput>;
+  editable: boolean;
+  onRemove: () => void;
+}
+
+/** One rule as a table row; each input is labelled with its column and rule number for screen readers. */
+export function FirmwareRuleRow({ index, register, errors, editable, onRemove }: Props) {
+  const base = `rules.${index}` as const;
+  const input = (name: string, label: string, extra: object = {}) => {
+    const path = `${base}.${name}`;
+    const message = (get(errors, path) as { message?: string } | undefined)?.message;
+    const errorId = `rule-${index}-${name}-error`;
+    return (
+      <td className="p-1.5 align-top">
+        <input
+          aria-label={`Rule ${index + 1}: ${label}`}
+          aria-invalid={message ? true : undefined}
+          aria-describedby={message ? errorId : undefined}
+          className={cell}
+          {...register(path as `rules.${number}.key`, extra)}
+        />
+        {message && (
+          <p id={errorId} role="alert" className="mt-1 text-base font-medium text-verdict-out_of_band">
+            ✕ {message}
+          </p>
+        )}
+      </td>
+    );
+  };
+  return (
+    <tr className="border-t border-surface-line">
+      {input('key', 'key')}
+      {input('pressControl.from', 'press control from', { setValueAs: blankIsUnset })}
+      {input('pressControl.before', 'press control before', { setValueAs: blankIsUnset })}
+      {input('monitorModule.from', 'monitor module from', { setValueAs: blankIsUnset })}
+      {input('monitorModule.before', 'monitor module before', { setValueAs: blankIsUnset })}
+      <td className="p-1.5 align-top">
+        <select aria-label={`Rule ${index + 1}: works together`} className={cell} {...register(`${base}.compatible`, { setValueAs: (v: unknown) => v === true || v === 'true' })}>
+          <option value="true">Compatible</option>
+          <option value="false">Not compatible</option>
+        </select>
+      </td>
+      {input('note', 'note')}
+      <td className="p-1.5 text-center align-top">
+        <input type="checkbox" aria-label={`Rule ${index + 1}: invented demo rule`} className="h-6 w-6" {...register(`${base}.invented`)} />
+      </td>
+      <td className={cn('p-1.5 align-top', !editable && 'hidden')}>
+        <Button variant="quiet" onClick={onRemove} aria-label={`Remove rule ${index + 1}`}>
+          Remove
+        </Button>
+      </td>
+    </tr>
+  );
+}

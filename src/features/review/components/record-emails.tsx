@@ -1,0 +1,37 @@
+import type { RecordEmail } from '../api/review-queries';
+import { formatDateTime } from '../lib/format';
+import { RecordSection } from './record-section';
+
+const STATUS = { queued: 'Queued', sending: 'Sending', sent: 'Sent', failed: 'Failed' } as Record<string, string>;
+
+interface RecordEmailsProps {
+  state: { available: boolean; items: RecordEmail[] } | undefined;
+  loading: boolean;
+  failed: boolean;
+}
+
+/** The report e-mails sent for this visit, or a plain note when the outbox cannot be read. */
+export function RecordEmails({ state, loading, failed }: RecordEmailsProps) {
+  let body;
+  if (loading) body = <p className="text-lg text-ink-muted">Loading e-mails…</p>;
+  else if (failed) body = <p className="text-lg text-ink-muted">The e-mails of this visit could not be loaded just now; the rest of the record is complete.</p>;
+  else if (!state?.available) body = <p className="text-lg text-ink-muted">The e-mail outbox is not available on this server yet, so sent reports cannot be listed here.</p>;
+  else if (state.items.length === 0) body = <p className="text-lg text-ink-muted">No report e-mail has been queued for this visit.</p>;
+  else
+    body = (
+      <ul className="space-y-2">
+        {state.items.map((mail) => (
+          <li key={mail.id} className="rounded-lg border border-surface-line p-3 text-lg">
+            <p className="font-semibold text-ink">
+              {STATUS[mail.status] ?? mail.status}: {mail.subject}
+            </p>
+            <p className="text-ink-muted">
+              To {mail.to} · {mail.sentAt ? `sent ${formatDateTime(mail.sentAt)}` : `queued ${formatDateTime(mail.createdAt)}`} · {mail.attempts} attempt{mail.attempts === 1 ? '' : 's'}
+            </p>
+            {mail.lastError && <p className="text-verdict-out_of_band">Last error: {mail.lastError}</p>}
+          </li>
+        ))}
+      </ul>
+    );
+  return <RecordSection title="E-mails sent">{body}</RecordSection>;
+}
