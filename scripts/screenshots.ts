@@ -21,7 +21,13 @@ const PAGES: { name: string; as: string | null; path: string }[] = [
   { name: 'sign-in', as: null, path: '/sign-in' },
   { name: 'presses-technician', as: 'dana.okafor@ridgeline.example', path: '/presses' },
   { name: 'visits-technician', as: 'dana.okafor@ridgeline.example', path: '/visits' },
-  { name: 'customers-manager', as: 'theo.brandt@ridgeline.example', path: '/customers' },
+  { name: 'review-manager', as: 'theo.brandt@ridgeline.example', path: '/review' },
+  { name: 'all-visits-manager', as: 'theo.brandt@ridgeline.example', path: '/visits/all' },
+  { name: 'dashboard-manager', as: 'theo.brandt@ridgeline.example', path: '/dashboard' },
+  { name: 'admin-hub', as: 'sam.quist@ridgeline.example', path: '/admin' },
+  { name: 'band-sets-admin', as: 'sam.quist@ridgeline.example', path: '/admin/band-sets' },
+  { name: 'procedures-admin', as: 'sam.quist@ridgeline.example', path: '/admin/procedures' },
+  { name: 'users-admin', as: 'sam.quist@ridgeline.example', path: '/admin/users' },
 ];
 
 async function signIn(page: Page, email: string) {

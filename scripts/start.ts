@@ -13,6 +13,11 @@ import { runInherit } from './lib/run';
 import { localSessionSecret } from './lib/secret';
 
 const port = Number(process.env.PORT ?? 3000);
+// Refuse early when something else holds the port: otherwise that other process would answer
+// our health check and the product would look started while this server failed to bind.
+if (!(await isFree(port))) {
+  fail(`port ${port} is already in use (another Crankwise still running?). Stop that process, or run with PORT=3001 npm start.`);
+}
 const { url, cluster } = await devDatabaseUrl();
 let stopping = false;
 const stopCluster = () => cluster?.stop();
