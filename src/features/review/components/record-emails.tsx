@@ -1,17 +1,22 @@
+import { Button } from '@/components/ui/button';
+import { ApiError } from '@/lib/api-error';
 import type { RecordEmail } from '../api/review-queries';
+import { useResendEmail } from '../api/use-resend-email';
 import { formatDateTime } from '../lib/format';
 import { RecordSection } from './record-section';
 
 const STATUS = { queued: 'Queued', sending: 'Sending', sent: 'Sent', failed: 'Failed' } as Record<string, string>;
 
 interface RecordEmailsProps {
+  visitId: number;
   state: { available: boolean; items: RecordEmail[] } | undefined;
   loading: boolean;
   failed: boolean;
 }
 
 /** The report e-mails sent for this visit, or a plain note when the outbox cannot be read. */
-export function RecordEmails({ state, loading, failed }: RecordEmailsProps) {
+export function RecordEmails({ visitId, state, loading, failed }: RecordEmailsProps) {
+  const resend = useResendEmail(visitId);
   let body;
   if (loading) body = <p className="text-lg text-ink-muted">Loading e-mails…</p>;
   else if (failed) body = <p className="text-lg text-ink-muted">The e-mails of this visit could not be loaded just now; the rest of the record is complete.</p>;
@@ -29,9 +34,24 @@ export function RecordEmails({ state, loading, failed }: RecordEmailsProps) {
               To {mail.to} · {mail.sentAt ? `sent ${formatDateTime(mail.sentAt)}` : `queued ${formatDateTime(mail.createdAt)}`} · {mail.attempts} attempt{mail.attempts === 1 ? '' : 's'}
             </p>
             {mail.lastError && <p className="text-verdict-out_of_band">Last error: {mail.lastError}</p>}
+            {(mail.status === 'sent' || mail.status === 'failed') && (
+              <Button variant="secondary" className="mt-2" disabled={resend.isPending} onClick={() => resend.mutate(mail.id)}>
+                Send again
+              </Button>
+            )}
           </li>
         ))}
       </ul>
     );
-  return <RecordSection title="E-mails sent">{body}</RecordSection>;
+  return (
+    <RecordSection title="E-mails sent">
+      {body}
+      {resend.isError && (
+        <p role="alert" className="mt-2 text-lg text-verdict-out_of_band">
+          {resend.error instanceof ApiError ? resend.error.message : 'The e-mail could not be queued again. Try again.'}
+        </p>
+      )}
+      {resend.isSuccess && <p className="mt-2 text-lg text-ink">Queued again: it goes out with the next outbox run.</p>}
+    </RecordSection>
+  );
 }

@@ -41,7 +41,7 @@ export function VisitRecord({ visitId, recordHref, queueHref }: VisitRecordProps
       ) : (
         <RecordPhotos photos={photos} />
       )}
-      <RecordEmails state={emails.data} loading={emails.isPending} failed={emails.isError} />
+      <RecordEmails visitId={visit.data.id} state={emails.data} loading={emails.isPending} failed={emails.isError} />
       {audit.isError ? <LoadError error={audit.error} what="the audit trail" onRetry={() => void audit.refetch()} /> : audit.data && <RecordAudit entries={audit.data.items} />}
     </div>
   );
