@@ -7,15 +7,10 @@ import { loadEnv } from '../../server/config/env';
 import { ReportIssue } from '../../server/modules/reports/report-issues.model';
 import { readReportLink, reportLinkKey, signReportLink } from '../../server/modules/reports/report-link';
 import type { ReportView } from '../../server/modules/reports/report-view';
-import type { ReportView as ClientReportView } from '../../src/features/report/api/report-types';
 import { signedInAgent, useApiApp } from '../api-app';
 import { makePress, makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
 import { answer, makeTestBandSet, reading, signaturePng, windingReadings, workToResistanceStep } from '../visit-steps';
-
-// The client keeps its own copy of the report shape; this fails to compile when the two drift apart.
-const sameShape: [ReportView, ClientReportView] = [{} as ClientReportView, {} as ReportView];
-void sameShape;
 
 const db = useTestDatabase();
 const ENV = { UPLOAD_DIR: `/tmp/crankwise-test-uploads-report-${process.pid}`, PUBLIC_BASE_URL: 'http://reports.test', COMPANY_NAME: 'Test Press Service (made up for tests)' };

@@ -74,18 +74,4 @@ export const attachmentListQuerySchema = z.object({
 });
 export type AttachmentListQuery = z.infer<typeof attachmentListQuerySchema>;
 
-export interface AttachmentDto {
-  id: string;
-  visitId: number;
-  kind: 'photo' | 'signature';
-  stepId: string | null;
-  caption: string | null;
-  mimeType: 'image/jpeg' | 'image/png' | 'image/webp';
-  bytes: number;
-  width: number | null;
-  height: number | null;
-  url: string;
-  thumbUrl: string | null;
-  createdBy: number;
-  createdAt: string;
-}
+export type { AttachmentDto } from '../../../shared/schemas/attachment';

@@ -1,25 +1,9 @@
 import { queryOptions } from '@tanstack/react-query';
+import type { AttachmentDto } from '@shared/schemas/attachment';
 import { apiRequest } from '@/lib/api-client';
 
-/**
- * One stored photo, as GET/POST /api/visits/:visitId/attachments answer it. The server keeps this
- * shape in its attachments module until it moves to shared/schemas; keep the two in step.
- */
-export interface VisitPhoto {
-  id: string;
-  visitId: number;
-  kind: 'photo' | 'signature';
-  stepId: string | null;
-  caption: string | null;
-  mimeType: 'image/jpeg' | 'image/png' | 'image/webp';
-  bytes: number;
-  width: number | null;
-  height: number | null;
-  url: string;
-  thumbUrl: string | null;
-  createdBy: number;
-  createdAt: string;
-}
+/** One stored photo, as the attachments API answers it (the shape shared with the server). */
+export type VisitPhoto = AttachmentDto;
 
 export const photoKeys = {
   /** Every photo list of one visit: what an upload or a delete invalidates. */
