@@ -15,7 +15,8 @@ export function CauseMixChart({ months }: { months: CauseMonth[] }) {
       <h2 id="cause-mix-title" className="text-2xl font-bold text-ink">
         Root causes per month
       </h2>
-      <div aria-hidden="true" className="h-80">
+      {present.length === 0 && <p className="text-lg text-ink-muted">No visits were closed in this period, so there is no cause to show yet.</p>}
+      <div aria-hidden="true" className={present.length === 0 ? 'hidden' : 'h-80'}>
         <ResponsiveContainer width="100%" height="100%">
           <BarChart data={data} margin={{ top: 8, right: 8, bottom: 8, left: 0 }}>
             <defs>
