@@ -45,6 +45,19 @@ export default defineConfig({
           testTimeout: 15_000,
         },
       },
+      {
+        extends: true,
+        test: {
+          // Whole journeys in Debian's Chromium against the real server; one file at a time on 2 cores.
+          name: 'e2e',
+          environment: 'node',
+          include: ['tests/e2e/**/*.e2e.ts'],
+          globalSetup: ['tests/e2e/setup/global-setup.ts'],
+          fileParallelism: false,
+          testTimeout: 120_000,
+          hookTimeout: 120_000,
+        },
+      },
     ],
   },
 });

@@ -110,6 +110,7 @@ function serveClient(app: Express, distSetting: string | undefined): void {
   // A page path (no file extension) gets the app; a missing file such as /favicon.ico gets a plain 404.
   app.get(/^\/(?!api\/)[^.]*$/, (_req, res) => {
     res.setHeader('Cache-Control', 'no-cache');
-    res.sendFile(index);
+    // dotfiles: the build may live under a folder such as .data/; the file itself is ours.
+    res.sendFile(index, { dotfiles: 'allow' });
   });
 }

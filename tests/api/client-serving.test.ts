@@ -6,8 +6,9 @@ import { describe, expect, it } from 'vitest';
 import { useApiApp } from '../api-app';
 import { useTestDatabase } from '../setup/database';
 
-const dist = fs.mkdtempSync(path.join(os.tmpdir(), 'crankwise-dist-'));
-fs.mkdirSync(path.join(dist, 'assets'));
+// Under a dot folder, as a build kept in .data/ would be.
+const dist = path.join(fs.mkdtempSync(path.join(os.tmpdir(), 'crankwise-dist-')), '.build');
+fs.mkdirSync(path.join(dist, 'assets'), { recursive: true });
 fs.writeFileSync(path.join(dist, 'index.html'), '<!doctype html><title>Crankwise test shell</title>');
 fs.writeFileSync(path.join(dist, 'assets', 'app-abc123.js'), 'console.log("app")');
 

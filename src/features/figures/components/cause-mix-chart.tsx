@@ -18,7 +18,7 @@ export function CauseMixChart({ months }: { months: CauseMonth[] }) {
       {present.length === 0 && <p className="text-lg text-ink-muted">No visits were closed in this period, so there is no cause to show yet.</p>}
       <div aria-hidden="true" className={present.length === 0 ? 'hidden' : 'h-80'}>
         <ResponsiveContainer width="100%" height="100%">
-          <BarChart data={data} margin={{ top: 8, right: 8, bottom: 8, left: 0 }}>
+          <BarChart data={data} margin={{ top: 8, right: 8, bottom: 8, left: 0 }} accessibilityLayer={false}>
             <defs>
               <CausePatterns />
             </defs>

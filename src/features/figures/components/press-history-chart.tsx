@@ -41,7 +41,7 @@ export function PressHistoryChart({ series }: { series: PressHistorySeries }) {
       </h2>
       <div aria-hidden="true" className="h-72">
         <ResponsiveContainer width="100%" height="100%">
-          <ComposedChart data={data} margin={{ top: 8, right: 16, bottom: 8, left: 8 }}>
+          <ComposedChart data={data} margin={{ top: 8, right: 16, bottom: 8, left: 8 }} accessibilityLayer={false}>
             <CartesianGrid strokeDasharray="3 3" />
             <XAxis dataKey="reference" tick={{ fontSize: 14 }} />
             <YAxis tick={{ fontSize: 14 }} domain={['auto', 'auto']} tickFormatter={(v: number) => formatSi(v, quantity)} width={80} />

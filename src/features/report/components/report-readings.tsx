@@ -1,6 +1,7 @@
 import { VerdictMark } from '@/components/ui/verdict-mark';
 import type { ReportView } from '../api/report-types';
 import { ReportSection } from './report-section';
+import { ScrollRegion } from '@/components/ui/scroll-region';
 
 export function ReportReadings({ report }: { report: ReportView }) {
   return (
@@ -8,7 +9,7 @@ export function ReportReadings({ report }: { report: ReportView }) {
       {report.readings.length === 0 ? (
         <p className="text-lg text-ink-muted">No readings were taken on the path this visit followed.</p>
       ) : (
-        <div className="overflow-x-auto">
+        <ScrollRegion label="Readings table">
           <table className="w-full min-w-[44rem] border-collapse text-left text-lg">
             <thead>
               <tr className="border-b-2 border-ink text-base text-ink-muted">
@@ -41,7 +42,7 @@ export function ReportReadings({ report }: { report: ReportView }) {
               ))}
             </tbody>
           </table>
-        </div>
+        </ScrollRegion>
       )}
       {report.replacedReadings > 0 && (
         <p className="text-base text-ink-muted">

@@ -1,3 +1,4 @@
+import { ScrollRegion } from '@/components/ui/scroll-region';
 import type { ReportView } from '../api/report-types';
 import { formatMinutes } from './report-dates';
 import { Facts, ReportSection } from './report-section';
@@ -25,7 +26,7 @@ export function ReportWork({ report }: { report: ReportView }) {
         {report.parts.length === 0 ? (
           <p className="text-lg text-ink-muted">No parts were used.</p>
         ) : (
-          <div className="overflow-x-auto">
+          <ScrollRegion label="Parts used">
             <table className="w-full min-w-[36rem] border-collapse text-left text-lg">
               <caption className="pb-2 text-left font-semibold">Parts used</caption>
               <thead>
@@ -49,7 +50,7 @@ export function ReportWork({ report }: { report: ReportView }) {
                 ))}
               </tbody>
             </table>
-          </div>
+          </ScrollRegion>
         )}
       </ReportSection>
       <ReportSection title="Recommendations">

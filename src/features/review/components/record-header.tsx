@@ -18,9 +18,9 @@ export function RecordHeader({ visit }: { visit: VisitDetail }) {
         <Fact term="Closed">{visit.closedAt ? formatDateTime(visit.closedAt) : null}</Fact>
         <Fact term="Time to repair (h:mm)">{repair === null ? null : hoursMinutes(repair)}</Fact>
         <Fact term="Root cause">{visit.closeOut.causeCategory ? CAUSE_LABELS[visit.closeOut.causeCategory] : null}</Fact>
-        <div className="col-span-2 md:col-span-4">
-          <Fact term="Fault as displayed">{visit.faultDisplayed}</Fact>
-        </div>
+        <Fact term="Fault as displayed" className="col-span-2 md:col-span-4">
+          {visit.faultDisplayed}
+        </Fact>
         <Fact term="Press-control firmware (found → left)">{`${visit.controlFirmwareFound ?? '—'} → ${visit.controlFirmwareLeft ?? '—'}`}</Fact>
         <Fact term="Monitor firmware (found → left)">{`${visit.monitorFirmwareFound ?? '—'} → ${visit.monitorFirmwareLeft ?? '—'}`}</Fact>
         <Fact term="Procedure">{`${visit.procedure.title} v${visit.procedure.version}`}</Fact>

@@ -4,6 +4,7 @@ import { CIRCUIT_LEADS } from '@shared/schemas/reading';
 import type { ReadingRecord, VisitDetail } from '@shared/schemas/visit-detail';
 import { VerdictMark } from '@/components/ui/verdict-mark';
 import { RecordSection } from './record-section';
+import { ScrollRegion } from '@/components/ui/scroll-region';
 
 const WHERE = { control_end: 'Control end', sensor_end: 'Sensor end' } as const;
 const QUANTITY = { resistance: 'resistance', ac_voltage: 'AC voltage' } as const;
@@ -37,7 +38,7 @@ export function RecordReadings({ visit }: { visit: VisitDetail }) {
       {current.length === 0 ? (
         <p className="text-lg text-ink-muted">No readings were taken on this visit.</p>
       ) : (
-        <div className="overflow-x-auto">
+        <ScrollRegion label="Readings table">
           <table className="w-full min-w-[56rem] text-left text-lg">
             <caption className="sr-only">Readings of {visit.reference} with verdicts and bands</caption>
             <thead className="border-b-2 border-surface-line text-base text-ink-muted">
@@ -69,7 +70,7 @@ export function RecordReadings({ visit }: { visit: VisitDetail }) {
               ))}
             </tbody>
           </table>
-        </div>
+        </ScrollRegion>
       )}
       {replaced > 0 && <p className="text-base text-ink-muted">{replaced} earlier entr{replaced === 1 ? 'y was' : 'ies were'} replaced by a new reading and kept in the history.</p>}
     </RecordSection>

@@ -42,7 +42,9 @@ export function ReviewActions({ visit, recordHref, queueHref }: ReviewActionsPro
       </Banner>
     );
   }
-  if (visit.status !== 'closed') return null;
+  // The record updates to the new status before the decision's callbacks run: keep the open dialog
+  // mounted until then, or the confirmation below is never shown.
+  if (visit.status !== 'closed' && !mode) return null;
   return (
     <div className="flex flex-wrap gap-3 rounded-xl border-2 border-accent bg-accent-soft p-4">
       <p className="w-full text-lg text-ink">This visit is waiting for your review.</p>
