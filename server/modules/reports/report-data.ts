@@ -124,10 +124,9 @@ export async function buildReportView(visitId: number, options: { companyName: s
   const { transaction, issue } = options;
   const visit = (await Visit.findByPk(visitId, { include: visitIncludes, transaction }))!;
   const ctx = await loadVisitContext(visit, transaction);
-  const [parts, attachments] = await Promise.all([
-    PartUsed.findAll({ where: { visitId }, order: [['createdAt', 'ASC']], transaction }),
-    Attachment.findAll({ where: { visitId }, order: [['createdAt', 'ASC'], ['id', 'ASC']], transaction }),
-  ]);
+  // Sequential: inside the close transaction these share one connection.
+  const parts = await PartUsed.findAll({ where: { visitId }, order: [['createdAt', 'ASC']], transaction });
+  const attachments = await Attachment.findAll({ where: { visitId }, order: [['createdAt', 'ASC'], ['id', 'ASC']], transaction });
   const steps = new Map(ctx.definition.steps.map((s) => [s.id, s]));
   const stepTitles = new Map(ctx.definition.steps.map((s) => [s.id, s.title]));
   const traversal = traverse(ctx);

@@ -21,12 +21,11 @@ export interface VisitContext {
 export async function loadVisitContext(visit: Visit, transaction?: Transaction): Promise<VisitContext> {
   const procedure = visit.procedureId ? await ProcedureVersion.findByPk(visit.procedureId, { transaction }) : null;
   if (!procedure) throw new AppError(500, 'visit_without_procedure', 'This visit has no procedure pinned.');
-  const [bandSet, ruleSet, results, readings] = await Promise.all([
-    visit.bandSetId ? BandSetVersion.findByPk(visit.bandSetId, { transaction }) : null,
-    visit.firmwareRuleSetId ? FirmwareRuleSet.findByPk(visit.firmwareRuleSetId, { transaction }) : null,
-    StepResult.findAll({ where: { visitId: visit.id }, order: [['createdAt', 'ASC']], transaction }),
-    Reading.findAll({ where: { visitId: visit.id }, order: [['createdAt', 'ASC']], transaction }),
-  ]);
+  // One after another: inside a transaction they share one connection, which runs one query at a time.
+  const bandSet = visit.bandSetId ? await BandSetVersion.findByPk(visit.bandSetId, { transaction }) : null;
+  const ruleSet = visit.firmwareRuleSetId ? await FirmwareRuleSet.findByPk(visit.firmwareRuleSetId, { transaction }) : null;
+  const results = await StepResult.findAll({ where: { visitId: visit.id }, order: [['createdAt', 'ASC']], transaction });
+  const readings = await Reading.findAll({ where: { visitId: visit.id }, order: [['createdAt', 'ASC']], transaction });
   return { visit, procedure, definition: procedure.definition, bandSet, rules: ruleSet?.rules ?? [], results, readings };
 }
 

@@ -86,10 +86,9 @@ export async function getVisitDetail(user: SessionUser, visitId: number, transac
 
 export async function detailOf(visit: Visit, transaction?: Transaction): Promise<VisitDetailDto> {
   const ctx = await loadVisitContext(visit, transaction);
-  const [parts, publishedBandSets] = await Promise.all([
-    PartUsed.findAll({ where: { visitId: visit.id }, order: [['createdAt', 'ASC']], transaction }),
-    BandSetVersion.findAll({ where: { publishedAt: { [Op.ne]: null } }, order: [['generation', 'ASC'], ['version', 'DESC']], transaction }),
-  ]);
+  // Sequential: a transaction's queries share one connection.
+  const parts = await PartUsed.findAll({ where: { visitId: visit.id }, order: [['createdAt', 'ASC']], transaction });
+  const publishedBandSets = await BandSetVersion.findAll({ where: { publishedAt: { [Op.ne]: null } }, order: [['generation', 'ASC'], ['version', 'DESC']], transaction });
   // Offer only the newest published version of each generation.
   const newest = publishedBandSets.filter((b, i, all) => all.findIndex((o) => o.generation === b.generation) === i);
   return visitDetail(ctx, traverse(ctx), { parts, publishedBandSets: newest });
