@@ -29,7 +29,6 @@ export default defineConfig({
           name: 'node',
           environment: 'node',
           include: ['shared/**/*.test.ts', 'server/**/*.test.ts', 'tests/api/**/*.test.ts'],
-          setupFiles: ['tests/setup/node.ts'],
           testTimeout: 20_000,
           hookTimeout: 60_000,
         },

@@ -15,6 +15,10 @@ import { logger } from './lib/logger';
 import { adminRoutes } from './modules/admin/admin.routes';
 import { inviteRoutes } from './modules/admin/invites.routes';
 import { attachmentRoutes } from './modules/attachments/attachments.routes';
+import { configureAttachments } from './modules/attachments/attachments.service';
+import { configureMail } from './modules/emails/mail-transport';
+import { reportLinkKey } from './modules/reports/report-link';
+import { configureReports } from './modules/reports/reports.service';
 import { DiskStorage } from './modules/attachments/storage';
 import { customerRoutes } from './modules/customers/customers.routes';
 import { emailRoutes } from './modules/emails/emails.routes';
@@ -73,19 +77,32 @@ export function createApp({ env, sequelize }: AppDeps): CrankwiseApp {
   app.use(passport.initialize());
   app.use(passport.session());
 
+  // The process's services that routes and the close-out share, configured once here.
+  const storage = new DiskStorage(path.resolve(env.UPLOAD_DIR));
+  const attachments = configureAttachments({ storage, maxUploadBytes: env.UPLOAD_MAX_BYTES });
+  configureMail({ host: env.SMTP_HOST, port: env.SMTP_PORT, secure: env.SMTP_SECURE, user: env.SMTP_USER, pass: env.SMTP_PASS, from: env.MAIL_FROM });
+  configureReports({
+    companyName: env.COMPANY_NAME,
+    publicBaseUrl: env.PUBLIC_BASE_URL,
+    linkKey: reportLinkKey(env),
+    linkDays: env.REPORT_LINK_DAYS,
+    timeZone: env.REPORT_TIME_ZONE,
+    storage,
+  });
+
   const api = express.Router();
   api.use('/health', healthRoutes(sequelize));
   api.use('/session', sessionRoutes({ signInLimit: env.SIGNIN_RATE_LIMIT, signInWindowMs: env.SIGNIN_RATE_WINDOW_MS }));
   api.use('/customers', customerRoutes());
   api.use('/sites', siteRoutes());
   api.use('/presses', pressRoutes());
-  api.use('/visits/:visitId/attachments', attachmentRoutes({ storage: new DiskStorage(path.resolve(env.UPLOAD_DIR)), maxUploadBytes: env.UPLOAD_MAX_BYTES }));
+  api.use('/visits/:visitId/attachments', attachmentRoutes(attachments, env.UPLOAD_MAX_BYTES));
   api.use('/visits', visitRoutes());
   api.use('/admin', adminRoutes({ publicBaseUrl: env.PUBLIC_BASE_URL }));
   api.use('/invites', inviteRoutes());
   api.use('/manager', managerRoutes());
-  api.use('/emails', emailRoutes({ env }));
-  api.use('/report', reportRoutes({ env }));
+  api.use('/emails', emailRoutes());
+  api.use('/report', reportRoutes());
   api.use(unknownRoute);
   app.use('/api', api);
 

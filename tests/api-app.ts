@@ -1,3 +1,6 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
 import type { Express } from 'express';
 import supertest from 'supertest';
 import { afterAll, beforeAll } from 'vitest';
@@ -10,12 +13,16 @@ import type { TestDatabase } from './setup/database';
 export function useApiApp(db: TestDatabase, envOverrides: Record<string, string> = {}): { app: () => Express } {
   let app: Express | undefined;
   let close: (() => Promise<void>) | undefined;
+  // Uploads go to a folder of this app's own, removed afterwards, unless the test names one.
+  let uploadDir: string | undefined;
   beforeAll(() => {
-    const env = loadEnv({ NODE_ENV: 'test', DATABASE_URL: db.url, SESSION_SECRET: 'test-secret-that-is-long-enough', LOG_LEVEL: 'silent', ...envOverrides });
+    uploadDir = envOverrides.UPLOAD_DIR ? undefined : fs.mkdtempSync(path.join(os.tmpdir(), 'crankwise-uploads-'));
+    const env = loadEnv({ NODE_ENV: 'test', DATABASE_URL: db.url, SESSION_SECRET: 'test-secret-that-is-long-enough', LOG_LEVEL: 'silent', UPLOAD_DIR: uploadDir, ...envOverrides });
     ({ app, close } = createApp({ env, sequelize: db.sequelize }));
   });
   afterAll(async () => {
     await close?.();
+    if (uploadDir) fs.rmSync(uploadDir, { recursive: true, force: true });
   });
   return {
     app: () => {

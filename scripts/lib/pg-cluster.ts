@@ -120,3 +120,13 @@ export async function startCluster(dir: string, opts: { preferredPort: number; t
     },
   };
 }
+
+/** Stops a cluster if it runs; starts nothing. */
+export function stopClusterIn(dir: string): boolean {
+  const absDir = path.resolve(dir);
+  if (!fs.existsSync(path.join(absDir, 'PG_VERSION'))) return false;
+  const bin = findPgBin();
+  if (!isRunning(bin, absDir)) return false;
+  asPostgres(bin, 'pg_ctl', ['-D', absDir, '-m', 'fast', '-w', 'stop'], absDir);
+  return true;
+}

@@ -30,6 +30,7 @@ const ROUTES: Route[] = [
   { method: 'post', path: '/api/admin/procedures/999999/publish' },
   { method: 'delete', path: '/api/admin/procedures/999999' },
   { method: 'get', path: '/api/admin/firmware-rules' },
+  { method: 'post', path: '/api/admin/firmware-rules/drafts' },
   { method: 'get', path: '/api/admin/firmware-rules/999999' },
   { method: 'put', path: '/api/admin/firmware-rules/999999', body: { rules: [] } },
   { method: 'post', path: '/api/admin/firmware-rules/999999/publish' },

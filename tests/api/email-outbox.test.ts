@@ -24,7 +24,6 @@ async function freePort(): Promise<number> {
 const smtpPort = await freePort();
 const db = useTestDatabase();
 const { app } = useApiApp(db, {
-  UPLOAD_DIR: `/tmp/crankwise-test-uploads-outbox-${process.pid}`,
   SMTP_HOST: '127.0.0.1',
   SMTP_PORT: String(smtpPort),
   MAIL_FROM: 'Test reports <reports@test.example>',

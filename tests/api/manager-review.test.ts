@@ -9,7 +9,7 @@ import { useTestDatabase } from '../setup/database';
 import { answer, makeTestBandSet, signaturePng, windingReadings, workToResistanceStep } from '../visit-steps';
 
 const db = useTestDatabase();
-const { app } = useApiApp(db, { UPLOAD_DIR: `/tmp/crankwise-test-uploads-${process.pid}` });
+const { app } = useApiApp(db);
 let tech: supertest.Agent;
 let manager: supertest.Agent;
 let pressId: number;

@@ -13,7 +13,7 @@ import { useTestDatabase } from '../setup/database';
 import { answer, makeTestBandSet, reading, signaturePng, windingReadings, workToResistanceStep } from '../visit-steps';
 
 const db = useTestDatabase();
-const ENV = { UPLOAD_DIR: `/tmp/crankwise-test-uploads-report-${process.pid}`, PUBLIC_BASE_URL: 'http://reports.test', COMPANY_NAME: 'Test Press Service (made up for tests)' };
+const ENV = { PUBLIC_BASE_URL: 'http://reports.test', COMPANY_NAME: 'Test Press Service (made up for tests)' };
 const { app } = useApiApp(db, ENV);
 const REFUSAL = 'This report link has expired or is not valid. Ask Test Press Service (made up for tests) to send it again.';
 let tech: supertest.Agent;

@@ -7,7 +7,7 @@ import { useTestDatabase } from '../setup/database';
 import { answer, makeTestBandSet, reading, signaturePng, windingReadings, workToResistanceStep } from '../visit-steps';
 
 const db = useTestDatabase();
-const { app } = useApiApp(db, { UPLOAD_DIR: `/tmp/crankwise-test-uploads-${process.pid}` });
+const { app } = useApiApp(db);
 let tech: supertest.Agent;
 let otherTech: supertest.Agent;
 let manager: supertest.Agent;

@@ -1,7 +1,6 @@
 import type { Transaction } from 'sequelize';
 import { User } from '../users/users.model';
 
-export const allUsersWithPassword = () => User.scope('withPassword').findAll({ order: [['name', 'ASC'], ['id', 'ASC']] });
 export const findUserWithPassword = (id: number, transaction?: Transaction) => User.scope('withPassword').findByPk(id, { transaction });
 
 /**

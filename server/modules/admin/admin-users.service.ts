@@ -6,7 +6,7 @@ import { AppError, notFound } from '../../lib/errors';
 import { audit } from '../audit/audit';
 import { User } from '../users/users.model';
 import type { UserInvite } from './invite.model';
-import { allUsersWithPassword, deleteSessionsOf, findUserWithPassword } from './admin-users.repository';
+import { deleteSessionsOf, findUserWithPassword } from './admin-users.repository';
 import { openInvites, revokeOpenInvites } from './invites.repository';
 import { issueInvite } from './invites.service';
 import { sendInviteEmail, type InviteMailer } from './invite-email';
@@ -29,14 +29,14 @@ function toAdminUser(user: User, invite: UserInvite | undefined, now = new Date(
 }
 
 async function adminUser(id: number): Promise<AdminUser> {
-  const user = await findUserWithPassword(id);
+  const user = await User.findByPk(id); // the default scope leaves the password hash out
   if (!user) throw notFound(`User ${id}`);
   const [invite] = await openInvites([id]);
   return toAdminUser(user, invite);
 }
 
 export async function listUsers(): Promise<AdminUser[]> {
-  const users = await allUsersWithPassword();
+  const users = await User.findAll({ order: [['name', 'ASC'], ['id', 'ASC']] });
   const invites = await openInvites(users.map((u) => u.id));
   return users.map((u) => toAdminUser(u, invites.find((i) => i.userId === u.id)));
 }

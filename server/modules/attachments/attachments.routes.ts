@@ -3,23 +3,15 @@ import { Router } from 'express';
 import { ANY_ROLE, requireRole } from '../../auth/require-role';
 import { logger } from '../../lib/logger';
 import { valid, validate } from '../../lib/validate';
-import { configureAttachments } from './attachments.service';
+import type { AttachmentService } from './attachments.service';
 import { attachmentListQuerySchema, attachmentParamsSchema, photoUploadFieldsSchema, visitParamsSchema } from './attachments.schema';
 import { photoUpload } from './photo-upload';
-import type { FileStorage } from './storage';
-
-export interface AttachmentRouteDeps {
-  storage: FileStorage;
-  /** UPLOAD_MAX_BYTES: the largest single photo. */
-  maxUploadBytes: number;
-}
 
 /**
  * Mounted at /api/visits/:visitId/attachments; who may reach which visit is decided by visit-access.
- * The storage given here is also the one storeSignature() writes to.
+ * The service is the process's one attachment service, configured in createApp.
  */
-export function attachmentRoutes({ storage, maxUploadBytes }: AttachmentRouteDeps): Router {
-  const attachments = configureAttachments({ storage, maxUploadBytes });
+export function attachmentRoutes(attachments: AttachmentService, maxUploadBytes: number): Router {
   const router = Router({ mergeParams: true });
   router.use(requireRole(...ANY_ROLE));
 

@@ -1,15 +1,12 @@
 import { Router } from 'express';
 import { idParamSchema } from '../../../shared/schemas/common';
 import { OFFICE_ROLES, requireRole } from '../../auth/require-role';
-import type { Env } from '../../config/env';
 import { valid, validate } from '../../lib/validate';
 import { emailListQuerySchema, emailResendSchema } from './emails.schema';
 import { listEmails, resendEmail } from './emails.service';
-import { configureMail } from './mail-transport';
 
 /** Mounted at /api/emails: the office sees what went out, what failed and why, and resends. */
-export function emailRoutes({ env }: { env: Env }): Router {
-  configureMail({ host: env.SMTP_HOST, port: env.SMTP_PORT, secure: env.SMTP_SECURE, user: env.SMTP_USER, pass: env.SMTP_PASS, from: env.MAIL_FROM });
+export function emailRoutes(): Router {
   const router = Router();
   router.use(requireRole(...OFFICE_ROLES));
 

@@ -1,15 +1,8 @@
-import { CAUSE_LABELS } from '../../../shared/schemas/visit';
-import type { VisitTableFilter, VisitTableRow } from '../../../shared/schemas/visit-table';
+import { CAUSE_LABELS, VISIT_STATUS_LABELS as STATUS_LABELS } from '../../../shared/schemas/visit';
+import type { VisitTableFilter } from '../../../shared/schemas/visit-table';
 import { csvRecord, UTF8_BOM } from './csv';
 import { visitBatches } from './visit-table.repository';
 
-const STATUS_LABELS: Record<VisitTableRow['status'], string> = {
-  draft: 'Draft',
-  in_progress: 'In progress',
-  closed: 'Waiting for review',
-  approved: 'Approved',
-  returned: 'Returned to technician',
-};
 
 export function exportHeader(tz: string): string[] {
   return [

@@ -91,7 +91,7 @@ export function table(doc: Doc, columns: Column[], rows: string[][], options: { 
   drawHeader();
   rows.forEach((row, r) => {
     doc.font('body').fontSize(size);
-    const h = Math.max(...row.map((cell, c) => doc.heightOfString(cell, { width: columns[c]!.width - 2 * pad - (c === 0 ? 0 : 0) }))) + 2 * pad;
+    const h = Math.max(...row.map((cell, c) => doc.heightOfString(cell, { width: columns[c]!.width - 2 * pad }))) + 2 * pad;
     if (doc.y + h > bottom(doc)) {
       doc.addPage();
       drawHeader();

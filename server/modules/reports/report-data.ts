@@ -120,9 +120,12 @@ function safetyView(steps: Step[]): ReportSafetyStatement[] {
 }
 
 /** Everything the report shows about one visit, read inside the caller's transaction when given. */
-export async function buildReportView(visitId: number, options: { companyName: string; issue: ReportIssue | null; transaction?: Transaction }): Promise<ReportView> {
+export async function buildReportView(
+  visitId: number,
+  options: { companyName: string; issue: ReportIssue | null; transaction?: Transaction; /** Already loaded with visitIncludes. */ visit?: Visit },
+): Promise<ReportView> {
   const { transaction, issue } = options;
-  const visit = (await Visit.findByPk(visitId, { include: visitIncludes, transaction }))!;
+  const visit = options.visit ?? (await Visit.findByPk(visitId, { include: visitIncludes, transaction }))!;
   const ctx = await loadVisitContext(visit, transaction);
   // Sequential: inside the close transaction these share one connection.
   const parts = await PartUsed.findAll({ where: { visitId }, order: [['createdAt', 'ASC']], transaction });

@@ -1,27 +1,15 @@
-import path from 'node:path';
 import { Router, type RequestHandler } from 'express';
 import { rateLimit } from 'express-rate-limit';
-import type { Env } from '../../config/env';
 import { AppError } from '../../lib/errors';
 import { valid, validate } from '../../lib/validate';
-import { DiskStorage } from '../attachments/storage';
-import { reportLinkKey } from './report-link';
 import { acknowledgeSchema, reportThumbParamsSchema, reportTokenParamsSchema } from './reports.schema';
-import { acknowledgeReport, configureReports, getPublicReport, getPublicReportPdf, getPublicThumb } from './reports.service';
+import { acknowledgeReport, getPublicReport, getPublicReportPdf, getPublicThumb } from './reports.service';
 
 /**
  * Mounted at /api/report: the customer's read-only report, opened with the signed link from the
  * e-mail. No session: the link is the only key, and every bad link gets the same refusal.
  */
-export function reportRoutes({ env }: { env: Env }): Router {
-  configureReports({
-    companyName: env.COMPANY_NAME,
-    publicBaseUrl: env.PUBLIC_BASE_URL,
-    linkKey: reportLinkKey(env),
-    linkDays: env.REPORT_LINK_DAYS,
-    timeZone: env.REPORT_TIME_ZONE,
-    storage: new DiskStorage(path.resolve(env.UPLOAD_DIR)),
-  });
+export function reportRoutes(): Router {
   const router = Router();
   // A page with its thumbnails is a dozen requests; guessing links needs many thousands.
   const limiter: RequestHandler = rateLimit({

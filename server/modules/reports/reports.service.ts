@@ -75,7 +75,7 @@ export async function enqueueVisitReport(visitId: number, transaction: Transacti
   const token = signReportLink(s.linkKey, { visitId, issueNumber: issue.issueNumber, expiresAt: expiresAt.getTime() / 1000 }, nonce);
   const link = reportLinkUrl(token);
 
-  const view = await buildReportView(visitId, { companyName: s.companyName, issue, transaction });
+  const view = await buildReportView(visitId, { companyName: s.companyName, issue, transaction, visit });
   const pdf = await renderReportPdf(view, imagesOf(visitId, transaction), s.timeZone);
   const context = { view, link, timeZone: s.timeZone };
   const email = await enqueueEmail(

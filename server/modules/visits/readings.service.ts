@@ -6,12 +6,12 @@ import type { SessionUser } from '../../../shared/schemas/session';
 import type { ReadingSaveInput } from '../../../shared/schemas/visit';
 import { AppError } from '../../lib/errors';
 import { audit } from '../audit/audit';
-import { loadVisitForRead, loadVisitForWrite } from './visit-access';
+import { loadVisitForWrite } from './visit-access';
 import { bandValues, currentReadings, findStep, loadVisitContext, type VisitContext } from './visit-context';
 import { readingDto } from './visit-dto';
 import { toReadingInput } from './visit-state';
 import { Reading } from './visit-work.model';
-import { detailOf, visitIncludes } from './visits.service';
+import { detailById, getVisitDetail } from './visits.service';
 import { Visit } from './visits.model';
 
 function verdictFields(j: EntryJudgement | undefined): Pick<Reading, 'verdict' | 'reason' | 'judgement'> {
@@ -45,15 +45,12 @@ export async function saveReading(user: SessionUser, visitId: number, input: Rea
   const existing = await Reading.findByPk(input.id);
   if (existing) {
     if (existing.visitId !== visitId) throw new AppError(409, 'id_reused', 'That save id belongs to another reading. Reload the visit.');
-    const visit = await loadVisitForRead(user, visitId);
-    return { reading: readingDto(existing), visit: await detailOf((await Visit.findByPk(visit.id, { include: visitIncludes }))!) };
+    return { reading: readingDto(existing), visit: await getVisitDetail(user, visitId) };
   }
   const parsed = parseEntry(input.entered, input.quantity);
   if (!parsed.ok) throw new AppError(400, 'invalid_input', 'Some fields need attention.', { entered: parsed.error });
-  const visit = await loadVisitForWrite(user, visitId);
-
   return Visit.sequelize!.transaction(async (transaction) => {
-    await Visit.findByPk(visit.id, { transaction, lock: transaction.LOCK.UPDATE });
+    const visit = await loadVisitForWrite(user, visitId, transaction);
     const ctx = await loadVisitContext(visit, transaction);
     const step = findStep(ctx, input.stepId);
     if (step.kind !== 'measure') throw new AppError(400, 'invalid_input', `Step "${step.id}" takes no readings.`);
@@ -81,12 +78,10 @@ export async function saveReading(user: SessionUser, visitId: number, input: Rea
       },
       { transaction },
     );
+    // rejudge updates `created` in place, so its verdict below is the stored one.
     ctx.readings.push(created);
-    if (previous) previous.supersededAt = new Date();
     await rejudgeVisitReadings(ctx, transaction);
-    await created.reload({ transaction });
     await audit({ visitId, actorId: user.id, action: previous ? 'reading_replaced' : 'reading_saved', detail: { stepId: input.stepId, circuit: input.circuit, position: input.position, entered: input.entered, verdict: created.verdict } }, transaction);
-    const fresh = await Visit.findByPk(visitId, { include: visitIncludes, transaction });
-    return { reading: readingDto(created), visit: await detailOf(fresh!, transaction) };
+    return { reading: readingDto(created), visit: await detailById(visitId, transaction) };
   });
 }

@@ -11,7 +11,7 @@ import { bandValues, findStep, latestPublishedBandSet, loadVisitContext, type Vi
 import { missingReadings, stepReadings, toReadingInput, traverse } from './visit-state';
 import { StepResult } from './visit-work.model';
 import { rejudgeVisitReadings } from './readings.service';
-import { detailOf, visitIncludes } from './visits.service';
+import { detailById, getVisitDetail } from './visits.service';
 import { Visit } from './visits.model';
 
 const invalid = (field: string, message: string) => new AppError(400, 'invalid_input', 'Some fields need attention.', { [field]: message });
@@ -92,16 +92,11 @@ export async function answerStep(user: SessionUser, visitId: number, stepId: str
   const existing = await StepResult.findByPk(input.id);
   if (existing) {
     if (existing.visitId !== visitId || existing.stepId !== stepId) throw new AppError(409, 'id_reused', 'That save id belongs to another answer. Reload the visit.');
-    const visit = await Visit.findByPk(visitId);
-    await loadVisitForWrite(user, visitId).catch((err: unknown) => {
-      // A retry after the visit closed still gets its answer back.
-      if (!(err instanceof AppError && err.status === 409)) throw err;
-    });
-    return detailOf(visit!);
+    // A retry gets its stored answer back, even after the visit has closed.
+    return getVisitDetail(user, visitId);
   }
-  const visit = await loadVisitForWrite(user, visitId);
   return Visit.sequelize!.transaction(async (transaction) => {
-    await Visit.findByPk(visit.id, { transaction, lock: transaction.LOCK.UPDATE });
+    const visit = await loadVisitForWrite(user, visitId, transaction);
     const ctx = await loadVisitContext(visit, transaction);
     const step = findStep(ctx, stepId);
     assertReachable(ctx, stepId);
@@ -132,7 +127,6 @@ export async function answerStep(user: SessionUser, visitId: number, stepId: str
       },
       transaction,
     );
-    const fresh = await Visit.findByPk(visitId, { include: visitIncludes, transaction });
-    return detailOf(fresh!, transaction);
+    return detailById(visitId, transaction);
   });
 }

@@ -1,3 +1,4 @@
+import type { Transaction } from 'sequelize';
 import type { SessionUser } from '../../../shared/schemas/session';
 import { AppError } from '../../lib/errors';
 import { Visit } from './visits.model';
@@ -12,8 +13,9 @@ export function visitReference(id: number): string {
  * A technician reaches only visits assigned to them; managers and admins reach every visit (DESIGN.md §2).
  * Another technician's visit answers 404, so its existence is not revealed.
  */
-export async function loadVisitForRead(user: SessionUser, visitId: number): Promise<Visit> {
-  const visit = await Visit.findByPk(visitId);
+export async function loadVisitForRead(user: SessionUser, visitId: number, transaction?: Transaction): Promise<Visit> {
+  // Inside a transaction the row is locked, so the checks below still hold when the work is written.
+  const visit = await Visit.findByPk(visitId, transaction ? { transaction, lock: transaction.LOCK.UPDATE } : {});
   if (!visit || (user.role === 'technician' && visit.technicianId !== user.id)) {
     throw new AppError(404, 'not_found', `Visit ${visitReference(visitId)} was not found, or it is assigned to another technician.`);
   }
@@ -21,8 +23,8 @@ export async function loadVisitForRead(user: SessionUser, visitId: number): Prom
 }
 
 /** As loadVisitForRead, and the visit must still be open for work (409 otherwise). */
-export async function loadVisitForWrite(user: SessionUser, visitId: number): Promise<Visit> {
-  const visit = await loadVisitForRead(user, visitId);
+export async function loadVisitForWrite(user: SessionUser, visitId: number, transaction?: Transaction): Promise<Visit> {
+  const visit = await loadVisitForRead(user, visitId, transaction);
   if (!(WRITABLE_STATUSES as readonly string[]).includes(visit.status)) {
     const why =
       visit.status === 'returned'

@@ -29,8 +29,7 @@ export async function closeVisit(user: SessionUser, visitId: number, input: Clos
   const now = new Date();
 
   await Visit.sequelize!.transaction(async (transaction) => {
-    const locked = (await Visit.findByPk(visitId, { transaction, lock: transaction.LOCK.UPDATE }))!;
-    if (locked.status !== 'in_progress') throw new AppError(409, 'visit_not_open', `Visit ${visitReference(visitId)} was closed meanwhile.`);
+    const locked = await loadVisitForWrite(user, visitId, transaction);
     for (const part of input.parts) {
       const known = await PartUsed.findByPk(part.id, { transaction });
       if (known) continue; // a retried close-out

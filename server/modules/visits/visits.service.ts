@@ -78,8 +78,13 @@ export async function listVisits(user: SessionUser, q: VisitListQuery): Promise<
   return toPage(rows.map(visitSummary), count, { q: undefined, page: q.page, pageSize: q.pageSize });
 }
 
-export async function getVisitDetail(user: SessionUser, visitId: number, transaction?: Transaction): Promise<VisitDetailDto> {
+export async function getVisitDetail(user: SessionUser, visitId: number): Promise<VisitDetailDto> {
   await loadVisitForRead(user, visitId);
+  return detailById(visitId);
+}
+
+/** The record as it stands now, read inside the caller's transaction when given (access already checked). */
+export async function detailById(visitId: number, transaction?: Transaction): Promise<VisitDetailDto> {
   const visit = (await Visit.findByPk(visitId, { include: visitIncludes, transaction }))!;
   return detailOf(visit, transaction);
 }

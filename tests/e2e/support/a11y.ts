@@ -2,9 +2,6 @@ import { AxeBuilder } from '@axe-core/playwright';
 import type { Page } from 'playwright-core';
 import { expect } from 'vitest';
 
-/** Pages checked so far, with what axe found there (serious or critical only), for the run's summary. */
-export const checkedPages: string[] = [];
-
 /**
  * axe-core over the whole page as it stands; fails on any serious or critical violation with a list
  * naming the rule, the element and the page, so the message says what to fix and where.
@@ -17,7 +14,6 @@ export async function checkA11y(page: Page, name: string): Promise<void> {
   const results = await new AxeBuilder({ page }).analyze();
   if (process.env.E2E_DEBUG) console.log(`[a11y] ${name}: idle ${t1 - t0} ms, axe ${Date.now() - t1} ms`);
   const bad = results.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
-  checkedPages.push(name);
   const lines = bad.flatMap((v) => v.nodes.map((n) => `  [${v.impact}] ${v.id}: ${v.help} — ${n.target.join(' ')}\n      ${n.failureSummary?.replace(/\n/g, ' ') ?? ''}`));
   expect(lines, `accessibility violations on "${name}" (${page.url()}):\n${lines.join('\n')}`).toEqual([]);
 }

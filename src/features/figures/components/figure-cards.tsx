@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import type { ManagerFigures } from '@shared/schemas/manager-figures';
 
-const hm = (m: number | null) => (m === null ? '—' : `${Math.floor(m / 60)}:${String(Math.round(m % 60)).padStart(2, '0')}`);
+import { formatHoursMinutes as hm } from '@/lib/format-minutes';
 
 function Card({ title, value, children }: { title: string; value: string; children: ReactNode }) {
   return (

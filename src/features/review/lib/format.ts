@@ -1,11 +1,4 @@
-import type { VisitStatus } from '@shared/schemas/visit';
-
-/** Minutes as h:mm, the way time sheets show labour and travel. */
-export function hoursMinutes(minutes: number | null | undefined): string {
-  if (minutes === null || minutes === undefined) return '—';
-  const h = Math.floor(minutes / 60);
-  return `${h}:${String(Math.round(minutes - h * 60)).padStart(2, '0')}`;
-}
+export { formatHoursMinutes as hoursMinutes } from '@/lib/format-minutes';
 
 const dateTime = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 export const formatDateTime = (iso: string | null | undefined) => (iso ? dateTime.format(new Date(iso)) : '—');
@@ -19,10 +12,4 @@ export function waitingFor(iso: string | null, now = Date.now()): string {
   return `${Math.floor(hours / 24)} days`;
 }
 
-export const STATUS_LABELS: Record<VisitStatus, string> = {
-  draft: 'Draft',
-  in_progress: 'In progress',
-  closed: 'Waiting for review',
-  approved: 'Approved',
-  returned: 'Returned to technician',
-};
+export { VISIT_STATUS_LABELS as STATUS_LABELS } from '@shared/schemas/visit';

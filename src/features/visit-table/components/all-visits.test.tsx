@@ -82,8 +82,8 @@ describe('all visits table', () => {
     const api = visitsApi();
     const { router, user } = renderAllVisits('/visits/all?page=2&sort=closedAt&dir=asc');
     await screen.findByRole('table');
-    await user.click(screen.getByRole('checkbox', { name: 'Waiting for review' }));
-    await user.click(screen.getByRole('checkbox', { name: 'Returned' }));
+    await user.click(screen.getByRole('checkbox', { name: 'Closed — awaiting review' }));
+    await user.click(screen.getByRole('checkbox', { name: 'Returned for correction' }));
 
     await waitFor(() => expect(api.callsTo('GET', '/api/manager/visits').at(-1)!.query.get('status')).toBe('closed,returned'));
     const last = api.callsTo('GET', '/api/manager/visits').at(-1)!;

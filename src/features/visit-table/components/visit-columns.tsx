@@ -1,20 +1,14 @@
+import { VISIT_STATUS_LABELS } from '@shared/schemas/visit';
+import { formatHoursMinutes } from '@/lib/format-minutes';
 import { createColumnHelper } from '@tanstack/react-table';
 import { Link } from 'react-router-dom';
 import { CAUSE_LABELS } from '@shared/schemas/visit';
 import type { VisitTableRow } from '@shared/schemas/visit-table';
 import { VerdictMark } from '@/components/ui/verdict-mark';
 
-const STATUS: Record<VisitTableRow['status'], string> = {
-  draft: 'Draft',
-  in_progress: 'In progress',
-  closed: 'Waiting for review',
-  approved: 'Approved',
-  returned: 'Returned',
-};
 
 const dateTime = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 const when = (iso: string | null) => (iso ? dateTime.format(new Date(iso)) : '—');
-const hm = (m: number | null) => (m === null ? '—' : `${Math.floor(m / 60)}:${String(m % 60).padStart(2, '0')}`);
 
 const col = createColumnHelper<VisitTableRow>();
 
@@ -36,7 +30,7 @@ export function visitColumns({ recordHref, pressHistoryHref }: ColumnLinks) {
         </Link>
       ),
     }),
-    col.accessor('status', { id: 'status', header: 'Status', sortDescFirst: false, cell: (c) => STATUS[c.getValue()] }),
+    col.accessor('status', { id: 'status', header: 'Status', sortDescFirst: false, cell: (c) => VISIT_STATUS_LABELS[c.getValue()] }),
     col.accessor('startedAt', { id: 'startedAt', header: 'Started', sortDescFirst: true, cell: (c) => when(c.getValue()) }),
     col.accessor('closedAt', { id: 'closedAt', header: 'Closed', sortDescFirst: true, cell: (c) => when(c.getValue()) }),
     col.accessor((r) => r.customer.name, { id: 'customer', header: 'Customer', sortDescFirst: false }),
@@ -53,7 +47,7 @@ export function visitColumns({ recordHref, pressHistoryHref }: ColumnLinks) {
     }),
     col.accessor((r) => r.technician.name, { id: 'technician', header: 'Technician', sortDescFirst: false }),
     col.accessor('causeCategory', { id: 'cause', header: 'Cause', sortDescFirst: false, cell: (c) => (c.getValue() ? CAUSE_LABELS[c.getValue()!] : '—') }),
-    col.accessor('repairMinutes', { id: 'repairMinutes', header: 'Time to repair', sortDescFirst: true, cell: (c) => hm(c.getValue()) }),
+    col.accessor('repairMinutes', { id: 'repairMinutes', header: 'Time to repair', sortDescFirst: true, cell: (c) => formatHoursMinutes(c.getValue()) }),
     col.display({
       id: 'readings',
       header: 'Readings',

@@ -1,3 +1,4 @@
+import { VISIT_STATUS_LABELS } from '@shared/schemas/visit';
 import { useQuery } from '@tanstack/react-query';
 import { useId } from 'react';
 import { CAUSE_LABELS, VISIT_STATUSES } from '@shared/schemas/visit';
@@ -7,7 +8,6 @@ import { customerOptions, pressOptions, siteOptions, technicianOptions, type Vis
 import type { VisitTableParam } from '../hooks/use-visit-table-params';
 import { FilterSelect } from './filter-select';
 
-const STATUS_LABELS = { draft: 'Draft', in_progress: 'In progress', closed: 'Waiting for review', approved: 'Approved', returned: 'Returned' } as const;
 
 interface VisitTableFiltersProps {
   request: VisitTableRequest;
@@ -38,7 +38,7 @@ export function VisitTableFilters({ request, onChange }: VisitTableFiltersProps)
           {VISIT_STATUSES.map((status) => (
             <label key={status} className="flex min-h-touch cursor-pointer items-center gap-3 rounded-lg border-2 border-surface-line px-4 text-lg has-[:checked]:border-accent has-[:checked]:bg-accent-soft">
               <input type="checkbox" className="h-6 w-6 accent-accent" checked={statuses.includes(status)} onChange={(e) => toggleStatus(status, e.target.checked)} />
-              {STATUS_LABELS[status]}
+              {VISIT_STATUS_LABELS[status]}
             </label>
           ))}
         </div>

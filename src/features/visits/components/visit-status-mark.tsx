@@ -1,13 +1,6 @@
-import type { VisitStatus } from '@shared/schemas/visit';
+import { VISIT_STATUS_LABELS, type VisitStatus } from '@shared/schemas/visit';
 import { cn } from '@/lib/cn';
 
-export const VISIT_STATUS_LABELS: Record<VisitStatus, string> = {
-  draft: 'Draft',
-  in_progress: 'In progress',
-  closed: 'Closed — awaiting review',
-  approved: 'Approved',
-  returned: 'Returned for correction',
-};
 
 // Each status has its own outline so it never depends on colour: open ring, half disc, filled disc, tick, flag.
 const SHAPES: Record<VisitStatus, { path: string; tone: string }> = {
