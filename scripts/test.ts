@@ -54,6 +54,8 @@ try {
   await sequelize.close();
 
   const env: NodeJS.ProcessEnv = { ...process.env, NODE_ENV: 'test', TEST_ADMIN_URL: adminUrl, TEST_TEMPLATE_DATABASE: TEMPLATE_DATABASE };
+  // Fault tests restart the throwaway cluster (restartCluster in scripts/lib/pg-cluster.ts); absent with DATABASE_URL.
+  if (cluster) env.TEST_PG_CLUSTER_DIR = cluster.dir;
   // `npm test -- --quick <vitest filters>` skips typecheck and lint while iterating on one suite.
   const quick = process.argv.includes('--quick');
   const vitestArgs = process.argv.slice(2).filter((a) => a !== '--quick');
