@@ -28,7 +28,7 @@ export default defineConfig({
         test: {
           name: 'node',
           environment: 'node',
-          include: ['shared/**/*.test.ts', 'server/**/*.test.ts', 'tests/api/**/*.test.ts'],
+          include: ['shared/**/*.test.ts', 'server/**/*.test.ts', 'scripts/**/*.test.ts', 'tests/api/**/*.test.ts'],
           testTimeout: 20_000,
           hookTimeout: 60_000,
         },

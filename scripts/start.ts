@@ -1,5 +1,5 @@
 // `npm start`: private PostgreSQL, migrations, demo seed, client build, one Express process on PORT.
-import { spawn, type ChildProcess } from 'node:child_process';
+import { spawn } from 'node:child_process';
 import net from 'node:net';
 import path from 'node:path';
 import { DEMO_PASSWORD, DEMO_USERS } from '../server/db/seed/demo-data';
@@ -10,6 +10,7 @@ import { migrate } from '../server/db/umzug';
 import { devDatabaseUrl } from './lib/dev-database';
 import { fail, say } from './lib/log';
 import { runInherit } from './lib/run';
+import { startMailInbox } from './lib/mail-inbox';
 import { localSessionSecret } from './lib/secret';
 
 const port = Number(process.env.PORT ?? 3000);
@@ -97,39 +98,17 @@ function isFree(p: number): Promise<boolean> {
   });
 }
 
-async function freePort(preferred: number): Promise<number> {
-  for (let p = preferred; p < preferred + 20; p++) if (await isFree(p)) return p;
-  throw new Error(`no free port between ${preferred} and ${preferred + 19}`);
-}
 
 /**
- * A local mail catcher (maildev, SMTP and a web inbox on loopback) so the reports Crankwise sends can
- * be read. Skipped when SMTP_HOST names a real server; if it fails, Crankwise still starts and its
- * outbox keeps the mail until a server answers.
+ * The local mail inbox, so the reports Crankwise sends can be read. Skipped when SMTP_HOST names a
+ * real server; if it fails, Crankwise still starts and its outbox keeps the mail until a server answers.
  */
 async function startMailCatcher(): Promise<{ env: Record<string, string>; inboxUrl?: string; stop: () => void }> {
   if (process.env.SMTP_HOST) return { env: {}, stop: () => {} };
-  let child: ChildProcess | undefined;
-  const stop = () => child?.kill('SIGTERM');
   try {
-    const [smtpPort, webPort] = [await freePort(1025), await freePort(1080)];
-    const args = ['--smtp', String(smtpPort), '--ip', '127.0.0.1', '--web', String(webPort), '--web-ip', '127.0.0.1', '--hide-extensions', 'STARTTLS', '--mail-directory', path.resolve('.data/maildev')];
-    child = spawn(process.execPath, ['node_modules/maildev/dist/bin/maildev.js', ...args], { stdio: ['ignore', 'ignore', 'pipe'] });
-    let errors = '';
-    child.stderr?.on('data', (d: Buffer) => (errors += d.toString()));
-    const exited = new Promise<never>((_, reject) => child!.once('exit', (code) => reject(new Error(`maildev exited (${code ?? 'signal'}) ${errors.trim()}`))));
-    exited.catch(() => {});
-    const inboxUrl = `http://127.0.0.1:${webPort}/`;
-    for (let i = 0; ; i++) {
-      // The inbox page answers only browsers (Accept: text/html); its REST API answers anyone.
-      const up = await Promise.race([fetch(`${inboxUrl}api/email`).then((r) => r.ok, () => false), exited]);
-      if (up) break;
-      if (i >= 100) throw new Error('maildev did not answer within 20 s');
-      await new Promise((r) => setTimeout(r, 200));
-    }
-    return { env: { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(smtpPort), SMTP_SECURE: 'false' }, inboxUrl, stop };
+    const inbox = await startMailInbox({ mailDir: path.resolve('.data/maildev') });
+    return { env: { SMTP_HOST: '127.0.0.1', SMTP_PORT: String(inbox.smtpPort), SMTP_SECURE: 'false' }, inboxUrl: inbox.inboxUrl, stop: inbox.stop };
   } catch (err) {
-    stop();
     say(`the local mail inbox did not start (${err instanceof Error ? err.message : String(err)}); reports stay queued in the outbox until a mail server answers`);
     return { env: {}, stop: () => {} };
   }

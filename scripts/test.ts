@@ -8,7 +8,7 @@ import { seedReference } from '../server/db/seed/seed-reference';
 import { migrate } from '../server/db/umzug';
 import { appUrl, dropDatabase, ensureDatabase } from './lib/database';
 import { say } from './lib/log';
-import { startCluster, type Cluster } from './lib/pg-cluster';
+import { describeDir, startCluster, type Cluster } from './lib/pg-cluster';
 import { runInherit } from './lib/run';
 
 export const TEMPLATE_DATABASE = 'crankwise_template';
@@ -25,7 +25,7 @@ if (process.env.DATABASE_URL) {
   // A fresh cluster per run (about 2 s): concurrent runs and crashed runs never meet each other.
   cluster = await startCluster(`.data/test-pg/run-${process.pid}`, { preferredPort: 54330, throwaway: true });
   adminUrl = cluster.adminUrl();
-  say(`test PostgreSQL is up on 127.0.0.1:${cluster.port}`);
+  say(`test PostgreSQL is up on 127.0.0.1:${cluster.port} (data in ${describeDir(cluster.dir)}, removed at the end)`);
 }
 
 const cleanups: (() => void)[] = [];

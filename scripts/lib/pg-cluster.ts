@@ -1,5 +1,7 @@
+import { createHash } from 'node:crypto';
 import fs from 'node:fs';
 import net from 'node:net';
+import os from 'node:os';
 import path from 'node:path';
 import { fail, say } from './log';
 import { runQuiet } from './run';
@@ -76,25 +78,89 @@ function runningPort(dir: string): number | undefined {
   return Number.isFinite(port) ? port : undefined;
 }
 
+/** Can the postgres system user (who runs the cluster when we are root) enter `dir`? */
+function postgresCanEnter(dir: string): boolean {
+  if (!isRoot) return true;
+  try {
+    runQuiet('runuser', ['-u', 'postgres', '--', 'test', '-x', dir, '-a', '-r', dir], { cwd: '/' });
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+/** Base folders, in order, for clusters that cannot live inside the checkout. /var/tmp survives a reboot. */
+function outsideBases(): string[] {
+  const bases = [process.env.CRANKWISE_PG_ROOT, '/var/tmp', os.tmpdir()].filter((b): b is string => !!b && fs.existsSync(b));
+  return [...new Set(bases.map((b) => path.resolve(b)))];
+}
+
+/** The folder outside the checkout that stands for `absDir`: named from a hash of the checkout-side path. */
+function outsideDirFor(absDir: string, base: string): string {
+  const hash = createHash('sha256').update(path.dirname(absDir)).digest('hex').slice(0, 16);
+  return path.join(base, `crankwise-pg-${hash}`, path.basename(absDir));
+}
+
+/** Makes (or checks) the per-checkout folder outside the checkout: ours alone, mode 0700, owned by postgres when root. */
+function claimOutsideParent(parent: string): void {
+  const owner = isRoot ? Number(runQuiet('id', ['-u', 'postgres']).trim()) : process.getuid?.();
+  if (!fs.existsSync(parent)) {
+    fs.mkdirSync(parent, { mode: 0o700 });
+    if (isRoot) runQuiet('chown', ['postgres:postgres', parent]);
+  }
+  const st = fs.lstatSync(parent);
+  // Under a shared temporary folder anyone could have made this name first: refuse what is not ours.
+  if (!st.isDirectory() || st.uid !== owner || (st.mode & 0o077) !== 0) {
+    fail(`${parent} exists but is not a private folder of ${isRoot ? 'the postgres user' : 'yours'} (mode 0700). Remove it, or set CRANKWISE_PG_ROOT to another folder.`);
+  }
+}
+
 /**
- * Starts (creating when needed) a private cluster in `dir`, on loopback, with its socket inside `dir`.
- * `throwaway` turns off durability for the test cluster only.
+ * Where a cluster named `dir` (relative to the checkout) really lives. Inside the checkout when the
+ * postgres user can reach it; otherwise (a checkout inside a 0700 home or `mktemp -d` folder, when we
+ * run as root) in a per-checkout folder under /var/tmp or the system temporary folder. An existing
+ * cluster is found where it already is, so `db:down` finds what `start` made.
+ */
+export function resolveClusterDir(dir: string): { dir: string; inCheckout: boolean } {
+  const absDir = path.resolve(dir);
+  if (fs.existsSync(path.join(absDir, 'PG_VERSION'))) return { dir: absDir, inCheckout: true };
+  const outside = outsideBases().map((b) => outsideDirFor(absDir, b));
+  const existing = outside.find((d) => fs.existsSync(path.join(d, 'PG_VERSION')));
+  if (existing) return { dir: existing, inCheckout: false };
+  fs.mkdirSync(path.dirname(absDir), { recursive: true, mode: 0o755 });
+  // A Unix socket path is limited to about 107 bytes; a deep checkout cannot hold the socket.
+  if (postgresCanEnter(path.dirname(absDir)) && socketFits(absDir)) return { dir: absDir, inCheckout: true };
+  for (const d of outside) {
+    if (postgresCanEnter(path.dirname(path.dirname(d)))) return { dir: d, inCheckout: false };
+  }
+  return fail(`no folder the postgres user can reach for the database (tried the checkout, ${outsideBases().join(', ')}). Set CRANKWISE_PG_ROOT to a folder it may enter, or DATABASE_URL to a server of your own.`);
+}
+
+const socketFits = (absDir: string) => Buffer.byteLength(path.join(absDir, '.s.PGSQL.65535')) < 100;
+
+/**
+ * Starts (creating when needed) a private cluster for `dir`, on loopback, with its socket inside its
+ * data folder. `throwaway` turns off durability for the test cluster only.
  */
 export async function startCluster(dir: string, opts: { preferredPort: number; throwaway: boolean }): Promise<Cluster> {
   const bin = findPgBin();
-  const absDir = path.resolve(dir);
-  // The parent stays world-readable so the postgres user can reach its own folder inside it.
-  fs.mkdirSync(path.dirname(absDir), { recursive: true, mode: 0o755 });
-  fs.chmodSync(path.dirname(absDir), 0o755);
+  const { dir: absDir, inCheckout } = resolveClusterDir(dir);
+  if (inCheckout) {
+    // The parent stays world-readable so the postgres user can reach its own folder inside it.
+    fs.chmodSync(path.dirname(absDir), 0o755);
+  } else {
+    claimOutsideParent(path.dirname(absDir));
+  }
   fs.mkdirSync(absDir, { recursive: true, mode: 0o700 });
   if (isRoot) runQuiet('chown', ['-R', 'postgres:postgres', absDir]);
 
   if (!fs.existsSync(path.join(absDir, 'PG_VERSION'))) {
-    say(`creating a private PostgreSQL cluster in ${path.relative(process.cwd(), absDir)}`);
+    say(`creating a private PostgreSQL cluster in ${describeDir(absDir)}`);
     asPostgres(bin, 'initdb', ['-D', absDir, '-U', 'postgres', '--auth=trust', '-E', 'UTF8', '--locale=C.UTF-8'], absDir);
     const conf = [
       "listen_addresses = '127.0.0.1'",
-      `unix_socket_directories = '${absDir}'`,
+      // Double quotes keep a path with spaces or commas whole; no socket when the path is too long for one.
+      `unix_socket_directories = '${socketFits(absDir) ? `"${absDir.replace(/'/g, "''")}"` : ''}'`,
       'max_connections = 100',
       ...(opts.throwaway ? ['fsync = off', 'synchronous_commit = off', 'full_page_writes = off'] : []),
     ];
@@ -121,16 +187,22 @@ export async function startCluster(dir: string, opts: { preferredPort: number; t
   };
 }
 
+/** A cluster folder as the start message names it: relative inside the checkout, absolute outside. */
+export function describeDir(absDir: string): string {
+  const rel = path.relative(process.cwd(), absDir);
+  return rel.startsWith('..') || path.isAbsolute(rel) ? absDir : rel;
+}
+
 /** Restarts a running cluster in place (fast shutdown: every open connection is cut), same port. */
 export function restartCluster(dir: string): void {
-  const absDir = path.resolve(dir);
+  const absDir = path.isAbsolute(dir) && fs.existsSync(path.join(dir, 'PG_VERSION')) ? dir : resolveClusterDir(dir).dir;
   const bin = findPgBin();
   asPostgres(bin, 'pg_ctl', ['-D', absDir, '-l', path.join(absDir, 'server.log'), '-m', 'fast', '-w', '-t', '30', 'restart'], absDir);
 }
 
 /** Stops a cluster if it runs; starts nothing. */
 export function stopClusterIn(dir: string): boolean {
-  const absDir = path.resolve(dir);
+  const { dir: absDir } = resolveClusterDir(dir);
   if (!fs.existsSync(path.join(absDir, 'PG_VERSION'))) return false;
   const bin = findPgBin();
   if (!isRunning(bin, absDir)) return false;
