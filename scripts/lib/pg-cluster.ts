@@ -127,15 +127,19 @@ export function resolveClusterDir(dir: string): { dir: string; inCheckout: boole
   const outside = outsideBases().map((b) => outsideDirFor(absDir, b));
   const existing = outside.find((d) => fs.existsSync(path.join(d, 'PG_VERSION')));
   if (existing) return { dir: existing, inCheckout: false };
-  fs.mkdirSync(path.dirname(absDir), { recursive: true, mode: 0o755 });
-  // A Unix socket path is limited to about 107 bytes; a deep checkout cannot hold the socket.
-  if (postgresCanEnter(path.dirname(absDir)) && socketFits(absDir)) return { dir: absDir, inCheckout: true };
+  // Folders we would make on the way are made world-enterable, so the nearest existing one decides.
+  if (postgresCanEnter(nearestExisting(path.dirname(absDir))) && socketFits(absDir)) return { dir: absDir, inCheckout: true };
   for (const d of outside) {
     if (postgresCanEnter(path.dirname(path.dirname(d)))) return { dir: d, inCheckout: false };
   }
   return fail(`no folder the postgres user can reach for the database (tried the checkout, ${outsideBases().join(', ')}). Set CRANKWISE_PG_ROOT to a folder it may enter, or DATABASE_URL to a server of your own.`);
 }
 
+function nearestExisting(dir: string): string {
+  return fs.existsSync(dir) || path.dirname(dir) === dir ? dir : nearestExisting(path.dirname(dir));
+}
+
+// A Unix socket path is limited to about 107 bytes; a deep checkout cannot hold the socket.
 const socketFits = (absDir: string) => Buffer.byteLength(path.join(absDir, '.s.PGSQL.65535')) < 100;
 
 /**
@@ -147,6 +151,7 @@ export async function startCluster(dir: string, opts: { preferredPort: number; t
   const { dir: absDir, inCheckout } = resolveClusterDir(dir);
   if (inCheckout) {
     // The parent stays world-readable so the postgres user can reach its own folder inside it.
+    fs.mkdirSync(path.dirname(absDir), { recursive: true, mode: 0o755 });
     fs.chmodSync(path.dirname(absDir), 0o755);
   } else {
     claimOutsideParent(path.dirname(absDir));
