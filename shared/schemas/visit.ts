@@ -13,15 +13,6 @@ export const VISIT_TRANSITIONS: Record<VisitStatus, readonly VisitStatus[]> = {
   approved: [],
 };
 
-/** One wording for a visit's status everywhere: screens, CSV export, report. */
-export const VISIT_STATUS_LABELS: Record<VisitStatus, string> = {
-  draft: 'Draft',
-  in_progress: 'In progress',
-  closed: 'Closed — awaiting review',
-  approved: 'Approved',
-  returned: 'Returned for correction',
-};
-
 export function canMoveVisit(from: VisitStatus, to: VisitStatus): boolean {
   return VISIT_TRANSITIONS[from].includes(to);
 }

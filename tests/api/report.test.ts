@@ -3,10 +3,10 @@ import { PDFParse } from 'pdf-parse';
 import sharp from 'sharp';
 import supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
+import { officeVisitRecordSchema, visitRecordSchema, type VisitRecord } from '../../shared/schemas/visit-record';
 import { loadEnv } from '../../server/config/env';
 import { ReportIssue } from '../../server/modules/reports/report-issues.model';
 import { readReportLink, reportLinkKey, signReportLink } from '../../server/modules/reports/report-link';
-import type { ReportView } from '../../server/modules/reports/report-view';
 import { signedInAgent, useApiApp } from '../api-app';
 import { makePress, makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
@@ -92,6 +92,17 @@ describe('closing a visit queues its report', () => {
     expect(Number((rows[0] as { bytes: string }).bytes)).toBeGreaterThan(5000);
   });
 
+  it("writes the record's key facts into the e-mail, in the record's words, as text and as HTML", async () => {
+    const v = await closedVisit();
+    const [rows] = await db.sequelize.query('SELECT text, html FROM emails WHERE visit_id = :id', { replacements: { id: v.id } });
+    const { text, html } = rows[0] as { text: string; html: string };
+    for (const fact of [`Service report ${v.reference}`, 'Customer: Made-up Stamping (test)', 'Root cause: Sensor', 'Labour (h:mm): 1:35', 'Travel (h:mm): 0:40', 'Signed by: Pat Plant, ']) {
+      expect(text).toContain(fact);
+    }
+    expect(text).toMatch(/- Rotor R1–R2, control end: OL — ○ Open circuit\./);
+    for (const fact of [`Service report ${v.reference}`, 'Labour (h:mm)', '1:35', 'Rotor R1–R2', 'Open circuit']) expect(html).toContain(fact);
+  });
+
   it('leaves no e-mail behind when the close is refused', async () => {
     const started = await tech.post('/api/visits').send({ pressId, faultDisplayed: 'Crank angle sensor fault 31' });
     const refused = await tech.post(`/api/visits/${started.body.id}/close`).send(await closeOutBody());
@@ -109,27 +120,45 @@ describe("the customer's report link", () => {
     other = await closedVisit();
   });
 
-  it('opens the read-only report without a session', async () => {
+  it('opens the visit record built from the closed visit, without a session', async () => {
     const res = await publicApi().get(`/api/report/${v.token}`);
     expect(res.status).toBe(200);
-    const report = res.body as ReportView;
-    expect(report).toMatchObject({ reference: v.reference, companyName: ENV.COMPANY_NAME, customer: { name: 'Made-up Stamping (test)' }, press: { assetTag: 'RP-1' }, technician: 'Tess Tech' });
+    // The answer is exactly the shared record model.
+    const report = visitRecordSchema.parse(res.body);
+    expect(report).toEqual(res.body);
+    expect(report).toMatchObject({ title: `Service report ${v.reference}`, companyName: ENV.COMPANY_NAME, timeZone: 'UTC' });
+    expect(report.header).toMatchObject({ visitId: v.id, reference: v.reference, customer: { name: 'Made-up Stamping (test)' }, press: { assetTag: 'RP-1' }, technician: { name: 'Tess Tech' } });
     expect(report.issue).toMatchObject({ number: 1, corrected: false });
-    expect(report.acknowledgement).toBeNull();
-    const rotor = report.readings.find((r) => r.circuit.startsWith('Rotor') && r.position === 'Control end')!;
-    expect(rotor).toMatchObject({ entered: 'OL', verdict: 'open', verdictLabel: 'Open circuit', band: '100 Ω ± 8 % at 20 °C (near edge ± 15 %)' });
-    const warm = report.readings.find((r) => r.entered === '52.3')!;
+    expect(report.signOff.acknowledgement).toBeNull();
+    const rotor = report.readings.items.find((r) => r.circuit === 'rotor' && r.position === 'control_end')!;
+    expect(rotor).toMatchObject({ circuitLabel: 'Rotor R1–R2', positionLabel: 'Control end', entered: 'OL', verdict: 'open', verdictLabel: 'Open circuit', band: '100 Ω ± 8 % at 20 °C (near edge ± 15 %)' });
+    const warm = report.readings.items.find((r) => r.entered === '52.3')!;
     // R_ref = 52.3 × (234.5 + 20) / (234.5 + 35) = 49.39 Ω: the copper conversion with 234.5, as in IEEE Std C57.12.90 (from memory of the standard).
-    expect(warm.temperature).toBe('Winding at 35 °C; corrected to 20 °C: 49.39 Ω');
-    expect(report.path[0]).toMatchObject({ stepId: 'press-at-rest', answer: 'Press at rest' });
-    expect(report.path[0]!.confirmedAt).not.toBeNull();
+    expect(warm).toMatchObject({ judgedValue: '49.39 Ω', temperature: 'Winding at 35 °C; corrected to 20 °C: 49.39 Ω' });
+    expect(report.path.steps[0]).toMatchObject({ stepId: 'press-at-rest', answer: 'Press at rest', confirmedBy: 'Tess Tech' });
+    expect(report.path.steps[0]!.confirmedAt).not.toBeNull();
+    expect(report.path.finding).not.toBeNull();
     expect(report.safety.map((s) => s.signalWord)).toEqual(expect.arrayContaining(['DANGER', 'WARNING', 'CAUTION']));
     expect(report.safety.some((s) => s.text.includes('lock out and tag out'))).toBe(true);
-    expect(report.returnToService?.checks).toHaveLength(4);
+    expect(report.asLeft).toMatchObject({ state: 'returned_to_production', stoppingTimeMs: 180 });
+    expect(report.asLeft?.checks.map((c) => c.key)).toEqual(['faultCleared', 'tdcAgrees', 'stoppingTimeChecked', 'presenceSensing']);
+    expect(report.times).toMatchObject({ labourMinutes: 95, travelMinutes: 40 });
+    expect(report.work.cause).toEqual({ category: 'sensor', label: 'Sensor' });
     expect(report.photos).toHaveLength(1);
-    expect(report.photos[0]!.caption).toBe('Sensor connector');
-    expect(report.signature).toMatchObject({ contactName: 'Pat Plant' });
+    expect(report.photos[0]).toMatchObject({ caption: 'Sensor connector', hasThumb: true });
+    expect(report.signOff).toMatchObject({ contactName: 'Pat Plant', contactEmail: 'pat@plant.example' });
+    expect(report.signOff.signatureId).not.toBeNull();
     expect(report.parts[0]).toMatchObject({ partNumber: 'TEST-PART-1', serialFitted: 'NEW-1' });
+  });
+
+  it("gives the office the same record, with the newest report issue and the review comment, and refuses a technician", async () => {
+    const customer = visitRecordSchema.parse((await publicApi().get(`/api/report/${v.token}`)).body);
+    const res = await manager.get(`/api/manager/visits/${v.id}/record`);
+    expect(res.status).toBe(200);
+    const office = officeVisitRecordSchema.parse(res.body);
+    expect(office).toEqual({ record: customer, reviewComment: null });
+    expect((await tech.get(`/api/manager/visits/${v.id}/record`)).status).toBe(403);
+    expect((await manager.get('/api/manager/visits/999999/record')).status).toBe(404);
   });
 
   it('serves a PDF with the reference, the verdicts, the bands with Ω and °C, the safety statements and page numbers', async () => {
@@ -154,15 +183,17 @@ describe("the customer's report link", () => {
     expect(text).toContain('TEST-PART-1');
     expect(text).toContain('Pat Plant');
     expect(text).toContain('Measured stopping time: 180 ms.');
+    expect(text).toContain('Labour (h:mm) 1:35');
+    expect(text).toContain('Returned to production after the return-to-service checks');
     expect(text).toContain('Sensor connector');
   });
 
   it("serves the visit's own photo thumbnails and nothing of another visit", async () => {
-    const report = (await publicApi().get(`/api/report/${v.token}`)).body as ReportView;
+    const report = (await publicApi().get(`/api/report/${v.token}`)).body as VisitRecord;
     const own = await publicApi().get(`/api/report/${v.token}/photos/${report.photos[0]!.id}/thumb`);
     expect(own.status).toBe(200);
     expect(own.headers['content-type']).toBe('image/jpeg');
-    const otherReport = (await publicApi().get(`/api/report/${other.token}`)).body as ReportView;
+    const otherReport = (await publicApi().get(`/api/report/${other.token}`)).body as VisitRecord;
     expect((await publicApi().get(`/api/report/${v.token}/photos/${otherReport.photos[0]!.id}/thumb`)).status).toBe(404);
     expect((await publicApi().get(`/api/report/${v.token}/photos/${randomUUID()}/thumb`)).status).toBe(404);
   });
@@ -194,7 +225,9 @@ describe("the customer's report link", () => {
     expect(Date.now() - Date.parse(first.body.acknowledgement.at)).toBeLessThan(60_000);
     const again = await publicApi().post(`/api/report/${v.token}/acknowledge`).send({ name: 'Somebody Else' });
     expect(again.body.acknowledgement).toEqual(first.body.acknowledgement);
-    expect((await publicApi().get(`/api/report/${v.token}`)).body.acknowledgement).toEqual(first.body.acknowledgement);
+    expect((await publicApi().get(`/api/report/${v.token}`)).body.signOff.acknowledgement).toEqual(first.body.acknowledgement);
+    // The office's record shows the same acknowledgement.
+    expect((await manager.get(`/api/manager/visits/${v.id}/record`)).body.record.signOff.acknowledgement).toEqual(first.body.acknowledgement);
     const [audits] = await db.sequelize.query(`SELECT detail FROM audit_events WHERE visit_id = :id AND action = 'report_acknowledged'`, { replacements: { id: v.id } });
     expect(audits).toEqual([{ detail: { issue: 1, by: 'Pat Plant' } }]);
   });
@@ -205,6 +238,8 @@ describe('a corrected report after the visit was returned', () => {
     const v = await closedVisit();
     await manager.post(`/api/visits/${v.id}/review`).send({ decision: 'return', comment: 'Add the serial of the fitted sensor.' }).expect(200);
     expect((await publicApi().get(`/api/report/${v.token}`)).status).toBe(404);
+    const returned = (await manager.get(`/api/manager/visits/${v.id}/record`)).body as { record: VisitRecord; reviewComment: string };
+    expect(returned).toMatchObject({ reviewComment: 'Add the serial of the fitted sensor.', record: { header: { status: 'returned', statusLabel: 'Returned for correction' } } });
     await tech.post(`/api/visits/${v.id}/reopen`).expect(200);
     await tech.post(`/api/visits/${v.id}/close`).send(await closeOutBody('maintenance@plant.example')).expect(200);
 

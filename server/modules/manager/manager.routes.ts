@@ -6,11 +6,12 @@ import { OFFICE_ROLES, requireRole } from '../../auth/require-role';
 import { logger } from '../../lib/logger';
 import { valid, validate } from '../../lib/validate';
 import { managerFigures } from './figures.service';
+import { getOfficeVisitRecord } from '../reports/reports.service';
 import { auditTrail, technicianOptions, visitTable } from './manager.service';
 import { pressHistory } from './press-history.service';
 import { visitCsvChunks } from './visit-export';
 
-/** The service manager's screens: all visits, the export, figures, press history, a visit's audit trail. */
+/** The service manager's screens: all visits, the export, figures, press history, a visit's record and audit trail. */
 export function managerRoutes(): Router {
   const router = Router();
   router.use(requireRole(...OFFICE_ROLES));
@@ -39,6 +40,11 @@ export function managerRoutes(): Router {
       logger.error({ err }, 'visit export failed part-way');
       res.destroy(err as Error);
     }
+  });
+
+  // The visit record as the office reads it: the same model as the customer's report, plus the review comment.
+  router.get('/visits/:id/record', id, async (req, res) => {
+    res.json(await getOfficeVisitRecord(valid(req, 'params', idParamSchema).id));
   });
 
   router.get('/visits/:id/audit', id, async (req, res) => {

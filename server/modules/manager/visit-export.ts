@@ -1,4 +1,5 @@
-import { CAUSE_LABELS, VISIT_STATUS_LABELS as STATUS_LABELS } from '../../../shared/schemas/visit';
+import { VISIT_STATUS_LABELS } from '../../../shared/format/labels';
+import { CAUSE_LABELS } from '../../../shared/schemas/visit';
 import type { VisitTableFilter } from '../../../shared/schemas/visit-table';
 import { csvRecord, UTF8_BOM } from './csv';
 import { visitBatches } from './visit-table.repository';
@@ -33,7 +34,7 @@ export async function* visitCsvChunks(filter: VisitTableFilter): AsyncGenerator<
       .map((r) =>
         csvRecord([
           r.reference,
-          STATUS_LABELS[r.status],
+          VISIT_STATUS_LABELS[r.status],
           r.startedLocal,
           r.closedLocal,
           r.customer.name,

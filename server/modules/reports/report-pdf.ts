@@ -1,6 +1,19 @@
+import { formatDateTime } from '../../../shared/format/date-time';
+import { formatMinutes } from '../../../shared/format/minutes';
+import {
+  acknowledgementLine,
+  firmwareLine,
+  noLongerApplyNote,
+  photoLabel,
+  recommendedByProcedure,
+  RECORD_LABELS as L,
+  RECORD_SECTIONS as S,
+  RECORD_WORDS as W,
+  replacedReadingsNote,
+  stoppingTimeLine,
+} from '../../../shared/record/record-wording';
+import type { VisitRecord } from '../../../shared/schemas/visit-record';
 import { createDoc, contentWidth, ensureRoom, facts, footers, heading, INK, MUTED, paragraph, safetyPanel, table, toBuffer, verdictShape, type Doc } from './pdf-layout';
-import { formatDateTime, formatMinutes, pressLine, reportTitle, siteLine } from './report-format';
-import type { ReportView } from './report-view';
 
 export interface ReportImages {
   /** Thumbnail bytes (JPEG) of a photo, or null when the file is missing. */
@@ -9,21 +22,24 @@ export interface ReportImages {
   signature: (attachmentId: string) => Promise<Buffer | null>;
 }
 
-const STANDARD_CLOSING = "The plant's lockout procedure, local codes and licensed practice come first; this report does not replace them.";
+export const reportFileName = (record: Pick<VisitRecord, 'header' | 'issue'>) =>
+  `service-report-${record.header.reference}${record.issue && record.issue.number > 1 ? `-issue-${record.issue.number}` : ''}.pdf`;
 
-function titleBlock(doc: Doc, view: ReportView, tz: string): void {
-  doc.font('bold').fontSize(11).fillColor(MUTED).text(view.companyName);
-  doc.font('bold').fontSize(20).fillColor(INK).text(reportTitle(view));
-  const issued = view.issue ? `Issued ${formatDateTime(view.issue.issuedAt, tz)}` : `Printed ${formatDateTime(new Date().toISOString(), tz)}`;
-  const corrected = view.issue?.corrected ? ` · Issue ${view.issue.number}: replaces every earlier report of this visit` : '';
+function titleBlock(doc: Doc, record: VisitRecord): void {
+  const tz = record.timeZone;
+  doc.font('bold').fontSize(11).fillColor(MUTED).text(record.companyName);
+  doc.font('bold').fontSize(20).fillColor(INK).text(record.title);
+  const issued = record.issue ? `Issued ${formatDateTime(record.issue.issuedAt, tz)}` : `Printed ${formatDateTime(new Date().toISOString(), tz)}`;
+  const corrected = record.issue?.corrected ? ` · Issue ${record.issue.number}: replaces every earlier report of this visit` : '';
   doc.font('body').fontSize(10).fillColor(MUTED).text(`${issued}${corrected}`);
   doc.fillColor(INK).moveDown(0.4);
 }
 
-function readingsTable(doc: Doc, view: ReportView): void {
-  heading(doc, 'Readings');
-  if (view.readings.length === 0) {
-    paragraph(doc, 'No readings were taken on the path this visit followed.', { muted: true });
+function readingsTable(doc: Doc, record: VisitRecord): void {
+  heading(doc, S.readings);
+  const { items, replaced } = record.readings;
+  if (items.length === 0) {
+    paragraph(doc, W.noReadings, { muted: true });
     return;
   }
   const w = contentWidth(doc);
@@ -34,60 +50,60 @@ function readingsTable(doc: Doc, view: ReportView): void {
     { header: 'Verdict', width: w * 0.14 },
     { header: 'Why, and allowances', width: w * 0.34 },
   ];
-  const rows = view.readings.map((r) => [
-    `${r.circuit}\n${r.position} · ${r.quantity === 'resistance' ? 'resistance' : 'AC voltage'}\n${r.stepTitle}`,
+  const rows = items.map((r) => [
+    `${r.circuitLabel}\n${r.positionLabel} · ${r.quantityLabel}\n${r.stepTitle}`,
     r.entered,
-    r.band ?? 'No band set chosen',
+    r.band ?? W.noBandSet,
     r.verdictLabel,
     [r.reason, r.temperature, r.cable].filter(Boolean).join('\n'),
   ]);
   table(doc, columns, rows, {
     beforeCell: (row, col, x, y) => {
-      const verdict = view.readings[row]!.verdict;
+      const verdict = items[row]!.verdict;
       if (col !== 3 || !verdict) return 0;
       verdictShape(doc, verdict, x, y + 0.5, 9);
       return 12;
     },
   });
-  if (view.replacedReadings > 0) {
-    paragraph(doc, `${view.replacedReadings} reading(s) were typed again during the visit; this table shows the values that stand. The earlier values are kept in the visit's record.`, { muted: true });
-  }
+  if (replaced > 0) paragraph(doc, replacedReadingsNote(replaced), { muted: true });
 }
 
-function pathSection(doc: Doc, view: ReportView, tz: string): void {
-  heading(doc, 'Path through the procedure');
-  paragraph(doc, `${view.procedure.title}, version ${view.procedure.version}`, { muted: true });
-  view.path.forEach((step, i) => {
+function pathSection(doc: Doc, record: VisitRecord): void {
+  const { steps, finding, noLongerApply } = record.path;
+  heading(doc, S.path);
+  paragraph(doc, `${record.header.procedure.title}, version ${record.header.procedure.version}`, { muted: true });
+  steps.forEach((step, i) => {
     ensureRoom(doc, 30);
     doc.moveDown(0.3);
     paragraph(doc, `${i + 1}. ${step.title} — ${step.answer}`, { bold: true });
     for (const c of step.confirmations) paragraph(doc, `   ✓ ${c}`);
-    if (step.confirmedAt) paragraph(doc, `   Confirmed ${formatDateTime(step.confirmedAt, tz)}`, { muted: true });
+    if (step.confirmedAt) paragraph(doc, `   Confirmed ${formatDateTime(step.confirmedAt, record.timeZone)}${step.confirmedBy ? ` by ${step.confirmedBy}` : ''}`, { muted: true });
     for (const d of step.details) paragraph(doc, `   ${d}`);
     if (step.note) paragraph(doc, `   Note: ${step.note}`);
   });
-  if (view.finding) {
+  if (finding) {
     doc.moveDown(0.3);
-    paragraph(doc, `${view.path.length + 1}. ${view.finding.title} (finding)`, { bold: true });
+    paragraph(doc, `${steps.length + 1}. ${finding.title} (finding)`, { bold: true });
   }
+  if (noLongerApply > 0) paragraph(doc, noLongerApplyNote(noLongerApply), { muted: true });
 }
 
-async function photosSection(doc: Doc, view: ReportView, images: ReportImages): Promise<void> {
-  if (view.photos.length === 0) return;
-  heading(doc, 'Photos');
+async function photosSection(doc: Doc, record: VisitRecord, images: ReportImages): Promise<void> {
+  if (record.photos.length === 0) return;
+  heading(doc, S.photos);
   const gap = 10;
   const cell = (contentWidth(doc) - 2 * gap) / 3;
   const imageHeight = cell * 0.75;
-  for (let i = 0; i < view.photos.length; i += 3) {
+  for (let i = 0; i < record.photos.length; i += 3) {
     ensureRoom(doc, imageHeight + 40);
     const y = doc.y;
     let rowBottom = y;
-    for (const [j, photo] of view.photos.slice(i, i + 3).entries()) {
+    for (const [j, photo] of record.photos.slice(i, i + 3).entries()) {
       const x = doc.page.margins.left + j * (cell + gap);
       const bytes = await images.photoThumb(photo.id);
       if (bytes) doc.image(bytes, x, y, { fit: [cell, imageHeight], align: 'center', valign: 'center' });
       else doc.rect(x, y, cell, imageHeight).lineWidth(0.5).strokeColor(MUTED).stroke();
-      const caption = [`Photo ${i + j + 1}`, photo.caption, photo.stepTitle ? `(${photo.stepTitle})` : null, bytes ? null : '— picture file missing'].filter(Boolean).join(' ');
+      const caption = `${photoLabel(i + j, photo.caption, photo.stepTitle)}${bytes ? '' : ' — picture file missing'}`;
       doc.font('body').fontSize(8.5).fillColor(MUTED).text(caption, x, y + imageHeight + 3, { width: cell });
       rowBottom = Math.max(rowBottom, doc.y);
     }
@@ -96,64 +112,38 @@ async function photosSection(doc: Doc, view: ReportView, images: ReportImages): 
   doc.fillColor(INK).fontSize(10);
 }
 
-async function signOff(doc: Doc, view: ReportView, images: ReportImages, tz: string): Promise<void> {
-  heading(doc, "Customer's sign-off");
+async function signOff(doc: Doc, record: VisitRecord, images: ReportImages): Promise<void> {
+  const { signOff: s, timeZone: tz } = record;
+  heading(doc, S.signOff);
   facts(doc, [
-    ['Signed by', view.signature.contactName ?? '—'],
-    ['Signed', formatDateTime(view.signature.signedAt, tz)],
+    [L.signedBy, s.contactName ?? W.notRecorded],
+    [L.signed, formatDateTime(s.signedAt, tz)],
   ]);
-  const png = view.signature.attachmentId ? await images.signature(view.signature.attachmentId) : null;
+  const png = s.signatureId ? await images.signature(s.signatureId) : null;
   if (png) {
     ensureRoom(doc, 90);
     const y = doc.y + 4;
     doc.image(png, doc.page.margins.left + 138, y, { fit: [240, 80] });
     doc.y = y + 86;
   }
-  if (view.acknowledgement) {
-    paragraph(doc, `Receipt acknowledged ${formatDateTime(view.acknowledgement.at, tz)}${view.acknowledgement.by ? ` by ${view.acknowledgement.by}` : ''}.`);
-  }
+  if (s.acknowledgement) paragraph(doc, acknowledgementLine(formatDateTime(s.acknowledgement.at, tz), s.acknowledgement.by));
 }
 
-/** The visit report as an A4 PDF: everything a plant files for an insurer's or auditor's inspection. */
-export async function renderReportPdf(view: ReportView, images: ReportImages, timeZone: string): Promise<Buffer> {
-  const tz = timeZone;
-  const doc = createDoc({ title: reportTitle(view), author: view.companyName, subject: `${view.customer.name} — ${view.press.assetTag}` });
-  titleBlock(doc, view, tz);
+function workSection(doc: Doc, record: VisitRecord): void {
+  const { work, times, parts } = record;
+  heading(doc, S.firmware);
   facts(doc, [
-    ['Customer', view.customer.name],
-    ['Site', siteLine(view)],
-    ['Press', pressLine(view)],
-    ['Visit', `${view.reference} · started ${formatDateTime(view.startedAt, tz)} · closed ${formatDateTime(view.closedAt, tz)}`],
-    ['Technician', view.technician],
-    ['Reference band set', view.bandSet ? `${view.bandSet.label}, version ${view.bandSet.version}${view.bandSet.invented ? ' (invented demo values)' : ''}` : 'None chosen'],
+    [L.pressControl, firmwareLine(work.firmware.controlFound, work.firmware.controlLeft)],
+    [L.monitorModule, firmwareLine(work.firmware.monitorFound, work.firmware.monitorLeft)],
   ]);
 
-  heading(doc, 'Fault as found');
-  paragraph(doc, view.faultDisplayed);
-
-  heading(doc, 'Finding and cause');
+  heading(doc, S.work);
   facts(doc, [
-    ['Root cause', view.cause.label],
-    ['Finding', view.finding ? `${view.finding.title}: ${view.finding.conclusion}` : '—'],
+    [L.actionsTaken, work.actionsTaken ?? W.notRecorded],
+    [L.labour, formatMinutes(times.labourMinutes)],
+    [L.travel, formatMinutes(times.travelMinutes)],
   ]);
-  if (view.finding?.escalate) paragraph(doc, 'Escalated: the fault points to a processor board, beyond field repair.', { bold: true });
-
-  pathSection(doc, view, tz);
-  readingsTable(doc, view);
-
-  heading(doc, 'Firmware');
-  facts(doc, [
-    ['Press control', `as found ${view.firmware.controlFound ?? '—'} · as left ${view.firmware.controlLeft ?? '—'}`],
-    ['Monitor module', `as found ${view.firmware.monitorFound ?? '—'} · as left ${view.firmware.monitorLeft ?? '—'}`],
-  ]);
-
-  heading(doc, 'Work done');
-  facts(doc, [
-    ['Actions taken', view.actionsTaken ?? '—'],
-    ['Labour', formatMinutes(view.labourMinutes)],
-    ['Travel', formatMinutes(view.travelMinutes)],
-  ]);
-  if (view.parts.length) {
+  if (parts.length) {
     doc.moveDown(0.5);
     const w = contentWidth(doc);
     table(
@@ -165,31 +155,62 @@ export async function renderReportPdf(view: ReportView, images: ReportImages, ti
         { header: 'Serial removed', width: w * 0.18 },
         { header: 'Serial fitted', width: w * 0.18 },
       ],
-      view.parts.map((p) => [p.partNumber, p.description || '—', String(p.quantity), p.serialRemoved ?? '—', p.serialFitted ?? '—']),
+      parts.map((p) => [p.partNumber, p.description || W.notRecorded, String(p.quantity), p.serialRemoved ?? W.notRecorded, p.serialFitted ?? W.notRecorded]),
     );
   } else {
-    paragraph(doc, 'No parts were used.', { muted: true });
+    paragraph(doc, W.noParts, { muted: true });
   }
 
-  heading(doc, 'Recommendations');
-  paragraph(doc, view.recommendations ?? 'None beyond the finding.');
-  if (view.finding) paragraph(doc, `Recommended by the procedure: ${view.finding.recommendedAction}`, { muted: true });
+  heading(doc, S.recommendations);
+  paragraph(doc, work.recommendations ?? W.noRecommendations);
+  if (record.path.finding) paragraph(doc, recommendedByProcedure(record.path.finding.recommendedAction), { muted: true });
+}
 
-  heading(doc, 'Return to service');
-  if (view.returnToService) {
-    for (const check of view.returnToService.checks) paragraph(doc, `✓ ${check}`);
-    if (view.returnToService.stoppingTimeMs !== null) paragraph(doc, `Measured stopping time: ${view.returnToService.stoppingTimeMs} ms.`);
+/** The visit report as an A4 PDF: everything a plant files for an insurer's or auditor's inspection. */
+export async function renderReportPdf(record: VisitRecord, images: ReportImages): Promise<Buffer> {
+  const { header: h, timeZone: tz } = record;
+  const doc = createDoc({ title: record.title, author: record.companyName, subject: `${h.customer.name} — ${h.press.assetTag}` });
+  titleBlock(doc, record);
+  facts(doc, [
+    [L.customer, h.customer.name],
+    [L.site, h.siteLine],
+    [L.press, h.pressLine],
+    [L.visit, `${h.reference} · started ${formatDateTime(h.startedAt, tz)} · closed ${formatDateTime(h.closedAt, tz)}`],
+    [L.technician, h.technician.name],
+    [L.bandSet, h.bandSetLine],
+  ]);
+
+  heading(doc, S.fault);
+  paragraph(doc, h.faultDisplayed);
+
+  heading(doc, S.finding);
+  const finding = record.path.finding;
+  facts(doc, [
+    [L.rootCause, record.work.cause.label],
+    [L.finding, finding ? `${finding.title}: ${finding.conclusion}` : W.notRecorded],
+  ]);
+  if (finding?.escalate) paragraph(doc, W.escalated, { bold: true });
+
+  pathSection(doc, record);
+  readingsTable(doc, record);
+  workSection(doc, record);
+
+  heading(doc, S.asLeft);
+  if (record.asLeft) {
+    paragraph(doc, record.asLeft.label, { bold: true });
+    for (const check of record.asLeft.checks) paragraph(doc, `✓ ${check.text}`);
+    if (record.asLeft.stoppingTimeMs !== null) paragraph(doc, stoppingTimeLine(record.asLeft.stoppingTimeMs));
   } else {
-    paragraph(doc, 'The post-repair checks were not recorded.', { bold: true });
+    paragraph(doc, W.checksNotRecorded, { bold: true });
   }
 
-  heading(doc, 'Safety statements that applied');
-  for (const s of view.safety) safetyPanel(doc, s.signalWord, s.text, `Applied at: ${s.appliedAt.join('; ')}.`);
-  paragraph(doc, STANDARD_CLOSING, { muted: true });
+  heading(doc, S.safety);
+  for (const s of record.safety) safetyPanel(doc, s.signalWord, s.text, `Applied at: ${s.appliedAt.join('; ')}.`);
+  paragraph(doc, W.plantRulesFirst, { muted: true });
 
-  await photosSection(doc, view, images);
-  await signOff(doc, view, images, tz);
+  await photosSection(doc, record, images);
+  await signOff(doc, record, images);
 
-  footers(doc, `${view.companyName} · Report ${view.reference}`);
+  footers(doc, `${record.companyName} · Report ${h.reference}`);
   return toBuffer(doc);
 }

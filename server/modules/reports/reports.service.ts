@@ -5,15 +5,15 @@ import { Attachment } from '../attachments/attachments.model';
 import type { FileStorage } from '../attachments/storage';
 import { Email } from '../emails/emails.model';
 import { enqueueEmail } from '../emails/outbox';
+import { visitReference } from '../../../shared/format/visit-reference';
 import { Visit } from '../visits/visits.model';
 import { visitIncludes } from '../visits/visits.service';
-import { buildReportView } from './report-data';
 import { reportEmailHtml, reportEmailText, reportSubject } from './report-email';
-import { reportFileName } from './report-format';
 import { ReportIssue } from './report-issues.model';
 import { newLinkNonce, readReportLink, signReportLink, verifyReportLink } from './report-link';
-import { renderReportPdf, type ReportImages } from './report-pdf';
-import type { ReportView } from './report-view';
+import { renderReportPdf, reportFileName, type ReportImages } from './report-pdf';
+import { readVisitRecord } from './visit-record-source';
+import type { OfficeVisitRecord, RecordAcknowledgement, VisitRecord } from '../../../shared/schemas/visit-record';
 
 export interface ReportSettings {
   companyName: string;
@@ -75,18 +75,18 @@ export async function enqueueVisitReport(visitId: number, transaction: Transacti
   const token = signReportLink(s.linkKey, { visitId, issueNumber: issue.issueNumber, expiresAt: expiresAt.getTime() / 1000 }, nonce);
   const link = reportLinkUrl(token);
 
-  const view = await buildReportView(visitId, { companyName: s.companyName, issue, transaction, visit });
-  const pdf = await renderReportPdf(view, imagesOf(visitId, transaction), s.timeZone);
-  const context = { view, link, timeZone: s.timeZone };
+  const record = await readVisitRecord(visitId, { companyName: s.companyName, timeZone: s.timeZone, issue, transaction, visit });
+  const pdf = await renderReportPdf(record, imagesOf(visitId, transaction));
+  const context = { record, link };
   const email = await enqueueEmail(
     {
       visitId,
       kind: 'visit_report',
       to,
-      subject: reportSubject(view),
+      subject: reportSubject(record),
       html: reportEmailHtml(context),
       text: reportEmailText(context),
-      attachments: [{ filename: reportFileName(view), contentType: 'application/pdf', content: pdf }],
+      attachments: [{ filename: reportFileName(record), contentType: 'application/pdf', content: pdf }],
       createdBy: actorId,
     },
     transaction,
@@ -119,15 +119,17 @@ async function resolveLink(token: string, transaction?: Transaction): Promise<Re
   return latest;
 }
 
-export async function getPublicReport(token: string): Promise<ReportView> {
+const recordOptions = (issue: ReportIssue | null) => ({ companyName: settings().companyName, timeZone: settings().timeZone, issue });
+
+export async function getPublicReport(token: string): Promise<VisitRecord> {
   const issue = await resolveLink(token);
-  return buildReportView(issue.visitId, { companyName: settings().companyName, issue });
+  return readVisitRecord(issue.visitId, recordOptions(issue));
 }
 
 export async function getPublicReportPdf(token: string): Promise<{ fileName: string; pdf: Buffer }> {
   const issue = await resolveLink(token);
-  const view = await buildReportView(issue.visitId, { companyName: settings().companyName, issue });
-  return { fileName: reportFileName(view), pdf: await renderReportPdf(view, imagesOf(issue.visitId), settings().timeZone) };
+  const record = await readVisitRecord(issue.visitId, recordOptions(issue));
+  return { fileName: reportFileName(record), pdf: await renderReportPdf(record, imagesOf(issue.visitId)) };
 }
 
 /** A thumbnail of one of the visit's own pictures (photos and the signature), nothing else. */
@@ -140,7 +142,7 @@ export async function getPublicThumb(token: string, attachmentId: string): Promi
 }
 
 /** Records that the contact received the report; a second acknowledgement keeps the first. */
-export async function acknowledgeReport(token: string, name: string | undefined): Promise<NonNullable<ReportView['acknowledgement']>> {
+export async function acknowledgeReport(token: string, name: string | undefined): Promise<RecordAcknowledgement> {
   return Visit.sequelize!.transaction(async (transaction) => {
     const issue = await resolveLink(token, transaction);
     if (!issue.acknowledgedAt) {
@@ -149,4 +151,12 @@ export async function acknowledgeReport(token: string, name: string | undefined)
     }
     return { at: issue.acknowledgedAt!.toISOString(), by: issue.acknowledgedBy };
   });
+}
+
+/** The office's record of a visit: the same model the customer's report shows, with the newest report issue, plus the review comment. */
+export async function getOfficeVisitRecord(visitId: number): Promise<OfficeVisitRecord> {
+  const visit = await Visit.findByPk(visitId, { include: visitIncludes });
+  if (!visit) throw new AppError(404, 'not_found', `Visit ${visitReference(visitId)} was not found.`);
+  const issue = await ReportIssue.findOne({ where: { visitId }, order: [['issueNumber', 'DESC']] });
+  return { record: await readVisitRecord(visitId, { ...recordOptions(issue), visit }), reviewComment: visit.reviewComment };
 }

@@ -1,5 +1,7 @@
 import { render, screen } from '@testing-library/react';
-import { VERDICT_LABELS, VerdictMark, type Verdict } from './verdict-mark';
+import { VERDICT_LABELS } from '@shared/format/labels';
+import type { Verdict } from '@shared/schemas/reading';
+import { VerdictMark } from './verdict-mark';
 
 describe('VerdictMark', () => {
   it('writes every verdict out in words and draws a different shape for each, so colour is never the only cue', () => {

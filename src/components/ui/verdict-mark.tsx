@@ -1,15 +1,7 @@
 import type { ReactNode } from 'react';
+import { VERDICT_LABELS } from '@shared/format/labels';
+import type { Verdict } from '@shared/schemas/reading';
 import { cn } from '@/lib/cn';
-
-export type Verdict = 'in_band' | 'near_edge' | 'out_of_band' | 'open' | 'short';
-
-export const VERDICT_LABELS: Record<Verdict, string> = {
-  in_band: 'In band',
-  near_edge: 'Near edge',
-  out_of_band: 'Out of band',
-  open: 'Open circuit',
-  short: 'Short circuit',
-};
 
 const TONES: Record<Verdict, string> = {
   in_band: 'bg-verdict-in_band-soft text-verdict-in_band',

@@ -3,9 +3,10 @@ import { useParams } from 'react-router-dom';
 import { buttonVariants } from '@/components/ui/button';
 import { LoadError } from '@/components/ui/load-error';
 import { Spinner } from '@/components/ui/spinner';
-import { reportOptions, reportPdfUrl } from '@/features/report/api/report-queries';
+import { RecordDocument } from '@/features/record/components/record-document';
+import { reportOptions, reportPdfUrl, reportThumbUrl } from '@/features/report/api/report-queries';
 import { AcknowledgePanel } from '@/features/report/components/acknowledge-panel';
-import { ReportDocument } from '@/features/report/components/report-document';
+import { ReportHeader } from '@/features/report/components/report-header';
 import { ReportRefusal } from '@/features/report/components/report-refusal';
 import { isApiError } from '@/lib/api-error';
 import { useDocumentTitle } from '@/lib/use-document-title';
@@ -14,7 +15,7 @@ import { useDocumentTitle } from '@/lib/use-document-title';
 export function ReportPage() {
   const token = useParams().token ?? '';
   const report = useQuery(reportOptions(token));
-  useDocumentTitle(report.data ? `Service report ${report.data.reference}` : 'Service report');
+  useDocumentTitle(report.data ? report.data.title : 'Service report');
 
   return (
     <main className="mx-auto max-w-5xl space-y-6 px-4 py-6 sm:px-6">
@@ -27,13 +28,14 @@ export function ReportPage() {
         ))}
       {report.data && (
         <>
+          <ReportHeader report={report.data} />
           <div className="flex flex-wrap gap-3">
             <a href={reportPdfUrl(token)} className={buttonVariants({ variant: 'secondary' })} download>
               Download PDF
             </a>
           </div>
           <AcknowledgePanel report={report.data} token={token} />
-          <ReportDocument report={report.data} token={token} />
+          <RecordDocument record={report.data} urls={{ thumb: (id) => reportThumbUrl(token, id), signature: (id) => reportThumbUrl(token, id) }} />
         </>
       )}
     </main>

@@ -2,6 +2,7 @@ import type { DefaultValues } from 'react-hook-form';
 import type { z } from 'zod';
 import type { closeOutSchema } from '@shared/schemas/visit';
 import type { VisitDetail } from '@shared/schemas/visit-detail';
+import { formatMinutes } from '@shared/format/minutes';
 
 /** What the form holds while it is typed: text for numbers, unticked boxes, an empty signature. */
 export type CloseOutFields = z.input<typeof closeOutSchema>;
@@ -46,6 +47,5 @@ export const emptyAsAbsent = (value: unknown) => (typeof value === 'string' && v
 /** "95" → "1:35"; null while the minutes are not a whole number yet. */
 export function hoursAndMinutes(text: unknown): string | null {
   if (typeof text !== 'string' || !/^\s*\d+\s*$/.test(text)) return null;
-  const minutes = Number(text);
-  return `${Math.floor(minutes / 60)}:${String(minutes % 60).padStart(2, '0')}`;
+  return formatMinutes(Number(text));
 }

@@ -1,7 +1,7 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
 import { isApiError } from '@/lib/api-error';
-import type { ReportAcknowledgement, ReportView } from './report-types';
+import type { RecordAcknowledgement, VisitRecord } from '@shared/schemas/visit-record';
 
 const base = (token: string) => `/api/report/${encodeURIComponent(token)}`;
 
@@ -13,7 +13,7 @@ export const reportKeys = {
 export const reportOptions = (token: string) =>
   queryOptions({
     queryKey: reportKeys.detail(token),
-    queryFn: ({ signal }) => apiRequest<ReportView>(base(token), { signal }),
+    queryFn: ({ signal }) => apiRequest<VisitRecord>(base(token), { signal }),
     // A refused link stays refused; only a network hiccup is worth another try.
     retry: (failures, error) => !(isApiError(error) && error.status < 500 && error.status > 0) && failures < 2,
   });
@@ -25,9 +25,9 @@ export const reportThumbUrl = (token: string, attachmentId: string) => `${base(t
 export function useAcknowledgeReport(token: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (name: string | undefined) => apiRequest<{ acknowledgement: ReportAcknowledgement }>(`${base(token)}/acknowledge`, { method: 'POST', body: { name } }),
+    mutationFn: (name: string | undefined) => apiRequest<{ acknowledgement: RecordAcknowledgement }>(`${base(token)}/acknowledge`, { method: 'POST', body: { name } }),
     onSuccess: ({ acknowledgement }) => {
-      queryClient.setQueryData(reportKeys.detail(token), (old: ReportView | undefined) => (old ? { ...old, acknowledgement } : old));
+      queryClient.setQueryData(reportKeys.detail(token), (old: VisitRecord | undefined) => (old ? { ...old, signOff: { ...old.signOff, acknowledgement } } : old));
     },
   });
 }

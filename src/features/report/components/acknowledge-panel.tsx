@@ -1,28 +1,28 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
+import { formatDateTime } from '@shared/format/date-time';
+import type { VisitRecord } from '@shared/schemas/visit-record';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
 import { errorMessage } from '@/lib/api-error';
 import { useAcknowledgeReport } from '../api/report-queries';
-import type { ReportView } from '../api/report-types';
-import { formatReportDate } from './report-dates';
 
 const acknowledgeFormSchema = z.object({ name: z.string().trim().max(120, 'Keep the name under 120 characters') });
 type AcknowledgeForm = z.infer<typeof acknowledgeFormSchema>;
 
 /** The contact confirms they received the report; once recorded, the time and name are shown instead. */
-export function AcknowledgePanel({ report, token }: { report: ReportView; token: string }) {
+export function AcknowledgePanel({ report, token }: { report: VisitRecord; token: string }) {
   const acknowledge = useAcknowledgeReport(token);
-  const { register, handleSubmit, formState } = useForm<AcknowledgeForm>({ resolver: zodResolver(acknowledgeFormSchema), defaultValues: { name: report.signature.contactName ?? '' } });
+  const { register, handleSubmit, formState } = useForm<AcknowledgeForm>({ resolver: zodResolver(acknowledgeFormSchema), defaultValues: { name: report.signOff.contactName ?? '' } });
 
-  if (report.acknowledgement) {
-    const { at, by } = report.acknowledgement;
+  if (report.signOff.acknowledgement) {
+    const { at, by } = report.signOff.acknowledgement;
     return (
       <Banner tone="info" role="status" title="Receipt acknowledged">
-        Acknowledged on {formatReportDate(at)}
+        Acknowledged on {formatDateTime(at, report.timeZone)}
         {by ? ` by ${by}` : ''}.
       </Banner>
     );

@@ -1,19 +1,9 @@
 import { queryOptions } from '@tanstack/react-query';
 import type { AuditTrailEntry } from '@shared/schemas/manager-figures';
-import type { VisitDetail } from '@shared/schemas/visit-detail';
+import type { OfficeVisitRecord } from '@shared/schemas/visit-record';
 import type { VisitTablePage } from '@shared/schemas/visit-table';
 import { apiRequest } from '@/lib/api-client';
 import { isApiError } from '@/lib/api-error';
-
-export interface RecordAttachment {
-  id: string;
-  kind: 'photo' | 'signature';
-  stepId: string | null;
-  caption: string | null;
-  url: string;
-  thumbUrl: string | null;
-  createdAt: string;
-}
 
 /** One e-mail of the visit's outbox (the fields of GET /api/emails that the record shows). */
 export interface RecordEmail {
@@ -31,7 +21,7 @@ export interface RecordEmail {
 export const reviewKeys = {
   queue: () => ['visits', 'review-queue'] as const,
   detail: (id: number) => ['visits', 'detail', id] as const,
-  attachments: (id: number) => ['visits', 'attachments', id] as const,
+  record: (id: number) => ['visits', 'record', id] as const,
   audit: (id: number) => ['visits', 'audit', id] as const,
   emails: (id: number) => ['emails', 'list', { visitId: id }] as const,
 };
@@ -44,17 +34,19 @@ export const reviewQueueOptions = () =>
       apiRequest<VisitTablePage>('/api/manager/visits', { query: { status: 'closed', sort: 'closedAt', dir: 'asc', pageSize: 100 }, signal }),
   });
 
+/** The visit record as the office reads it: the shared record model plus the review comment. */
 export const visitRecordOptions = (id: number) =>
   queryOptions({
-    queryKey: reviewKeys.detail(id),
-    queryFn: ({ signal }) => apiRequest<VisitDetail>(`/api/visits/${id}`, { signal }),
+    queryKey: reviewKeys.record(id),
+    queryFn: ({ signal }) => apiRequest<OfficeVisitRecord>(`/api/manager/visits/${id}/record`, { signal }),
   });
 
-export const visitAttachmentsOptions = (id: number) =>
-  queryOptions({
-    queryKey: reviewKeys.attachments(id),
-    queryFn: ({ signal }) => apiRequest<{ items: RecordAttachment[] }>(`/api/visits/${id}/attachments`, { signal }),
-  });
+/** The record's pictures through the office's session. */
+export const visitPictureUrls = (visitId: number) => ({
+  thumb: (attachmentId: string) => `/api/visits/${visitId}/attachments/${attachmentId}/thumb`,
+  full: (attachmentId: string) => `/api/visits/${visitId}/attachments/${attachmentId}/file`,
+  signature: (attachmentId: string) => `/api/visits/${visitId}/attachments/${attachmentId}/file`,
+});
 
 export const visitAuditOptions = (id: number) =>
   queryOptions({

@@ -12,6 +12,7 @@ export function useReviewDecision(visitId: number) {
     onSuccess: async (visit) => {
       queryClient.setQueryData(reviewKeys.detail(visitId), visit);
       await Promise.all([
+        queryClient.invalidateQueries({ queryKey: reviewKeys.record(visitId) }),
         queryClient.invalidateQueries({ queryKey: reviewKeys.queue() }),
         queryClient.invalidateQueries({ queryKey: reviewKeys.audit(visitId) }),
         queryClient.invalidateQueries({ queryKey: ['visits', 'list'] }),

@@ -1,5 +1,5 @@
 import type { AuditTrailEntry } from '@shared/schemas/manager-figures';
-import { formatDateTime } from '../lib/format';
+import { formatDateTime } from '@shared/format/date-time';
 import { RecordSection } from './record-section';
 
 const ACTIONS: Record<string, string> = {
@@ -23,7 +23,7 @@ const ACTIONS: Record<string, string> = {
 const label = (action: string) => ACTIONS[action] ?? action.replace(/_/g, ' ');
 
 /** Who did what and when on this visit, oldest first; review comments are shown in full. */
-export function RecordAudit({ entries }: { entries: AuditTrailEntry[] }) {
+export function RecordAudit({ entries, timeZone }: { entries: AuditTrailEntry[]; timeZone: string }) {
   return (
     <RecordSection title="Audit trail">
       <ol className="space-y-1.5">
@@ -31,7 +31,7 @@ export function RecordAudit({ entries }: { entries: AuditTrailEntry[] }) {
           const comment = typeof e.detail.comment === 'string' ? e.detail.comment : null;
           return (
             <li key={e.id} className="text-lg">
-              <span className="text-ink-muted">{formatDateTime(e.createdAt)}</span> · <span className="font-semibold text-ink">{e.actor?.name ?? 'System'}</span> · {label(e.action)}
+              <span className="text-ink-muted">{formatDateTime(e.createdAt, timeZone)}</span> · <span className="font-semibold text-ink">{e.actor?.name ?? 'System'}</span> · {label(e.action)}
               {comment && <span className="block pl-4 text-ink">“{comment}”</span>}
             </li>
           );

@@ -25,10 +25,11 @@ describe('e-mails on the visit record', () => {
     const api = mockApi({ 'POST /api/emails/7/resend': { status: 200, body: { ...failedMail, status: 'queued' } } });
     render(
       <QueryClientProvider client={new QueryClient()}>
-        <RecordEmails visitId={42} state={{ available: true, items: [failedMail] }} loading={false} failed={false} />
+        <RecordEmails visitId={42} state={{ available: true, items: [failedMail] }} loading={false} failed={false} timeZone="UTC" />
       </QueryClientProvider>,
     );
     expect(screen.getByText('Last error: 550 mailbox unavailable')).toBeInTheDocument();
+    expect(screen.getByText(/queued 1 Dec 2026, 10:00 UTC/)).toBeInTheDocument();
     await userEvent.click(screen.getByRole('button', { name: 'Send again' }));
     expect(await screen.findByText(/Queued again/)).toBeInTheDocument();
     expect(api.callsTo('POST', '/api/emails/7/resend')).toHaveLength(1);

@@ -1,21 +1,22 @@
+import { formatDateTime } from '@shared/format/date-time';
+import { EMAIL_STATUS_LABELS } from '@shared/format/labels';
 import { Button } from '@/components/ui/button';
 import { ApiError } from '@/lib/api-error';
 import type { RecordEmail } from '../api/review-queries';
 import { useResendEmail } from '../api/use-resend-email';
-import { formatDateTime } from '../lib/format';
 import { RecordSection } from './record-section';
-
-const STATUS = { queued: 'Queued', sending: 'Sending', sent: 'Sent', failed: 'Failed' } as Record<string, string>;
 
 interface RecordEmailsProps {
   visitId: number;
   state: { available: boolean; items: RecordEmail[] } | undefined;
   loading: boolean;
   failed: boolean;
+  /** The record's zone (REPORT_TIME_ZONE), so these times read like the record's. */
+  timeZone: string;
 }
 
 /** The report e-mails sent for this visit, or a plain note when the outbox cannot be read. */
-export function RecordEmails({ visitId, state, loading, failed }: RecordEmailsProps) {
+export function RecordEmails({ visitId, state, loading, failed, timeZone }: RecordEmailsProps) {
   const resend = useResendEmail(visitId);
   let body;
   if (loading) body = <p className="text-lg text-ink-muted">Loading e-mails…</p>;
@@ -28,10 +29,10 @@ export function RecordEmails({ visitId, state, loading, failed }: RecordEmailsPr
         {state.items.map((mail) => (
           <li key={mail.id} className="rounded-lg border border-surface-line p-3 text-lg">
             <p className="font-semibold text-ink">
-              {STATUS[mail.status] ?? mail.status}: {mail.subject}
+              {EMAIL_STATUS_LABELS[mail.status] ?? mail.status}: {mail.subject}
             </p>
             <p className="text-ink-muted">
-              To {mail.to} · {mail.sentAt ? `sent ${formatDateTime(mail.sentAt)}` : `queued ${formatDateTime(mail.createdAt)}`} · {mail.attempts} attempt{mail.attempts === 1 ? '' : 's'}
+              To {mail.to} · {mail.sentAt ? `sent ${formatDateTime(mail.sentAt, timeZone)}` : `queued ${formatDateTime(mail.createdAt, timeZone)}`} · {mail.attempts} attempt{mail.attempts === 1 ? '' : 's'}
             </p>
             {mail.lastError && <p className="text-verdict-out_of_band">Last error: {mail.lastError}</p>}
             {(mail.status === 'sent' || mail.status === 'failed') && (

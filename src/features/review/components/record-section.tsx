@@ -15,14 +15,3 @@ export function RecordSection({ title, children, aside }: { title: string; child
     </section>
   );
 }
-
-/** A term and its value; an empty value reads "not recorded" rather than a blank. */
-export function Fact({ term, children, className }: { term: string; children: ReactNode; className?: string }) {
-  const empty = children === null || children === undefined || children === '';
-  return (
-    <div className={className}>
-      <dt className="text-base font-semibold text-ink-muted">{term}</dt>
-      <dd className="text-lg text-ink">{empty ? <span className="text-ink-muted">not recorded</span> : children}</dd>
-    </div>
-  );
-}

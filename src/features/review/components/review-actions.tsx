@@ -1,14 +1,22 @@
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
-import type { VisitDetail } from '@shared/schemas/visit-detail';
+import type { VisitStatus } from '@shared/schemas/visit';
 import { Banner } from '@/components/ui/banner';
 import { Button, buttonVariants } from '@/components/ui/button';
 import { reviewQueueOptions } from '../api/review-queries';
 import { ReviewDecisionDialog, type ReviewMode } from './review-decision-dialog';
 
+/** The few facts of the visit the decision needs. */
+export interface ReviewedVisit {
+  id: number;
+  reference: string;
+  status: VisitStatus;
+  technicianName: string;
+}
+
 interface ReviewActionsProps {
-  visit: VisitDetail;
+  visit: ReviewedVisit;
   recordHref: (id: number) => string;
   queueHref: string;
 }
@@ -24,7 +32,7 @@ export function ReviewActions({ visit, recordHref, queueHref }: ReviewActionsPro
     return (
       <Banner
         role="status"
-        title={decided === 'approved' ? `${visit.reference} approved.` : `${visit.reference} returned to ${visit.technician.name}.`}
+        title={decided === 'approved' ? `${visit.reference} approved.` : `${visit.reference} returned to ${visit.technicianName}.`}
         action={
           <div className="flex flex-wrap gap-3">
             {next && (

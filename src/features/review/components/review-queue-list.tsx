@@ -1,12 +1,13 @@
 import { useQuery } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
+import { formatMinutes } from '@shared/format/minutes';
 import { CAUSE_LABELS } from '@shared/schemas/visit';
 import { Banner } from '@/components/ui/banner';
 import { LoadError } from '@/components/ui/load-error';
 import { Spinner } from '@/components/ui/spinner';
 import { VerdictMark } from '@/components/ui/verdict-mark';
 import { reviewQueueOptions } from '../api/review-queries';
-import { formatDateTime, hoursMinutes, waitingFor } from '../lib/format';
+import { formatDateTime, waitingFor } from '../lib/format';
 
 /** Closed visits waiting for review, longest-waiting first, with what needs a closer look flagged. */
 export function ReviewQueueList({ recordHref }: { recordHref: (id: number) => string }) {
@@ -35,7 +36,7 @@ export function ReviewQueueList({ recordHref }: { recordHref: (id: number) => st
                 <span className="text-lg text-ink-muted">waiting {waitingFor(v.closedAt)}</span>
               </div>
               <p className="text-lg text-ink">
-                {v.technician.name} · {v.causeCategory ? CAUSE_LABELS[v.causeCategory] : 'No cause given'} · closed {formatDateTime(v.closedAt)} · time to repair {hoursMinutes(v.repairMinutes)}
+                {v.technician.name} · {v.causeCategory ? CAUSE_LABELS[v.causeCategory] : 'No cause given'} · closed {formatDateTime(v.closedAt)} · time to repair {formatMinutes(v.repairMinutes)}
               </p>
               <p className="text-lg text-ink-muted">{v.faultDisplayed}</p>
               {(v.failedReadings > 0 || v.nearEdgeReadings > 0) && (

@@ -1,5 +1,4 @@
-export { formatHoursMinutes as hoursMinutes } from '@/lib/format-minutes';
-
+// The queue lists many visits without their record, so it shows times in the reader's own zone.
 const dateTime = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 export const formatDateTime = (iso: string | null | undefined) => (iso ? dateTime.format(new Date(iso)) : '—');
 
@@ -11,5 +10,3 @@ export function waitingFor(iso: string | null, now = Date.now()): string {
   if (hours < 48) return `${Math.floor(hours)} hour${Math.floor(hours) === 1 ? '' : 's'}`;
   return `${Math.floor(hours / 24)} days`;
 }
-
-export { VISIT_STATUS_LABELS as STATUS_LABELS } from '@shared/schemas/visit';

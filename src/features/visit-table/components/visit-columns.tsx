@@ -1,5 +1,5 @@
-import { VISIT_STATUS_LABELS } from '@shared/schemas/visit';
-import { formatHoursMinutes } from '@/lib/format-minutes';
+import { VISIT_STATUS_LABELS } from '@shared/format/labels';
+import { formatMinutes } from '@shared/format/minutes';
 import { createColumnHelper } from '@tanstack/react-table';
 import { Link } from 'react-router-dom';
 import { CAUSE_LABELS } from '@shared/schemas/visit';
@@ -47,7 +47,7 @@ export function visitColumns({ recordHref, pressHistoryHref }: ColumnLinks) {
     }),
     col.accessor((r) => r.technician.name, { id: 'technician', header: 'Technician', sortDescFirst: false }),
     col.accessor('causeCategory', { id: 'cause', header: 'Cause', sortDescFirst: false, cell: (c) => (c.getValue() ? CAUSE_LABELS[c.getValue()!] : '—') }),
-    col.accessor('repairMinutes', { id: 'repairMinutes', header: 'Time to repair', sortDescFirst: true, cell: (c) => formatHoursMinutes(c.getValue()) }),
+    col.accessor('repairMinutes', { id: 'repairMinutes', header: 'Time to repair', sortDescFirst: true, cell: (c) => formatMinutes(c.getValue()) }),
     col.display({
       id: 'readings',
       header: 'Readings',

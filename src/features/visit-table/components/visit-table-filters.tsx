@@ -1,4 +1,4 @@
-import { VISIT_STATUS_LABELS } from '@shared/schemas/visit';
+import { VISIT_STATUS_LABELS } from '@shared/format/labels';
 import { useQuery } from '@tanstack/react-query';
 import { useId } from 'react';
 import { CAUSE_LABELS, VISIT_STATUSES } from '@shared/schemas/visit';

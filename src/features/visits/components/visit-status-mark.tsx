@@ -1,4 +1,5 @@
-import { VISIT_STATUS_LABELS, type VisitStatus } from '@shared/schemas/visit';
+import { VISIT_STATUS_LABELS } from '@shared/format/labels';
+import type { VisitStatus } from '@shared/schemas/visit';
 import { cn } from '@/lib/cn';
 
 

@@ -1,0 +1,223 @@
+import { formatSi } from '../domain/format-quantity';
+import type { EntryJudgement, ResistanceFigures, VoltageFigures } from '../domain/judge-entry';
+import { traverseProcedure } from '../domain/traverse-procedure';
+import { RETURN_TO_SERVICE } from '../data/safety-messages';
+import { visitReference } from '../format/visit-reference';
+import { circuitLabel, POSITION_LABELS, QUANTITY_LABELS, verdictLabel, VISIT_STATUS_LABELS } from '../format/labels';
+import type { BandSetValues } from '../schemas/band-set';
+import type { ProcedureDefinition, Step } from '../schemas/procedure';
+import type { Cable, CauseCategory, Circuit, Position, Quantity, Verdict } from '../schemas/reading';
+import { CAUSE_LABELS, type ReturnToService, type VisitStatus } from '../schemas/visit';
+import type { AsLeft, RecordPathStep, RecordReading, VisitRecord } from '../schemas/visit-record';
+import { AS_LEFT_LABELS, bandLine, RECORD_WORDS, RETURN_TO_SERVICE_CHECKS } from './record-wording';
+
+/** What the server reads for one visit, as plain values: the builder below turns it into the record. */
+export interface VisitRecordSource {
+  companyName: string;
+  timeZone: string;
+  visit: {
+    id: number;
+    status: VisitStatus;
+    faultDisplayed: string;
+    startedAt: string | null;
+    closedAt: string | null;
+    signedAt: string | null;
+    causeCategory: CauseCategory | null;
+    actionsTaken: string | null;
+    recommendations: string | null;
+    labourMinutes: number | null;
+    travelMinutes: number | null;
+    returnToService: ReturnToService | null;
+    contactName: string | null;
+    contactEmail: string | null;
+    controlFirmwareFound: string | null;
+    controlFirmwareLeft: string | null;
+    monitorFirmwareFound: string | null;
+    monitorFirmwareLeft: string | null;
+  };
+  customer: { name: string };
+  site: { name: string; address: string | null; city: string | null };
+  press: { assetTag: string; model: string; tonnage: number; controlModel: string | null; sensorGeneration: string | null };
+  technicianName: string;
+  procedure: { title: string; version: number; definition: ProcedureDefinition };
+  bandSet: { label: string; generation: string; version: number; bands: BandSetValues } | null;
+  /** Every step result, oldest first, with superseded ones. */
+  results: { stepId: string; outcome: string | null; inputs: Record<string, unknown>; note: string | null; confirmedAt: string | null; createdBy: number; supersededAt: string | null }[];
+  /** Every reading, oldest first, with superseded ones. */
+  readings: {
+    id: string;
+    stepId: string;
+    quantity: Quantity;
+    circuit: Circuit;
+    position: Position;
+    entered: string;
+    windingTemperatureC: number | null;
+    cable: Cable | null;
+    verdict: Verdict | null;
+    reason: string;
+    judgement: Record<string, unknown>;
+    supersededAt: string | null;
+  }[];
+  parts: { id: string; partNumber: string; description: string; quantity: number; serialRemoved: string | null; serialFitted: string | null }[];
+  /** Photos and signatures, oldest first. */
+  attachments: { id: string; kind: 'photo' | 'signature'; caption: string | null; stepId: string | null; hasThumb: boolean }[];
+  /** Names of the people who recorded step results, by user id. */
+  people: Record<number, string>;
+  issue: { number: number; issuedAt: string; expiresAt: string; acknowledgedAt: string | null; acknowledgedBy: string | null } | null;
+}
+
+export const reportTitle = (reference: string, corrected: boolean) => `${corrected ? 'Corrected service report' : 'Service report'} ${reference}`;
+
+function pressLine(p: VisitRecordSource['press']): string {
+  return [p.assetTag, p.model, `${p.tonnage} t`, p.controlModel, p.sensorGeneration ? `sensor generation ${p.sensorGeneration}` : null].filter(Boolean).join(', ');
+}
+
+function readingOf(src: VisitRecordSource, stepTitles: Map<string, string>, r: VisitRecordSource['readings'][number]): RecordReading {
+  const j = r.judgement as unknown as EntryJudgement;
+  const figures = j?.status === 'judged' ? j.figures : null;
+  const resistance = figures?.kind === 'resistance' ? (figures as ResistanceFigures) : null;
+  const judged = resistance ? resistance.atReference : figures?.kind === 'ac_voltage' ? (figures as VoltageFigures).judged : null;
+  let temperature: string | null = null;
+  if (r.windingTemperatureC !== null && resistance?.atReference != null) {
+    temperature = `Winding at ${r.windingTemperatureC} °C; corrected to ${resistance.referenceTemperatureC} °C: ${formatSi(resistance.atReference, 'resistance')}`;
+  }
+  let cable: string | null = null;
+  if (resistance?.cable && r.cable) {
+    const run = `${r.cable.length} ${r.cable.lengthUnit} ${r.cable.lengthIs === 'loop' ? 'loop' : 'one way'}`;
+    cable = `AWG ${r.cable.awg} cable, ${run}: ${formatSi(resistance.cable.resistance, 'resistance')} subtracted (winding ${formatSi(resistance.winding ?? 0, 'resistance')})`;
+  } else if (r.cable) {
+    cable = 'Taken at the sensor end: no cable allowance.';
+  }
+  return {
+    id: r.id,
+    stepId: r.stepId,
+    stepTitle: stepTitles.get(r.stepId) ?? r.stepId,
+    circuit: r.circuit,
+    circuitLabel: circuitLabel(r.circuit),
+    quantity: r.quantity,
+    quantityLabel: QUANTITY_LABELS[r.quantity],
+    position: r.position,
+    positionLabel: POSITION_LABELS[r.position],
+    entered: r.entered,
+    judgedValue: typeof judged === 'number' ? formatSi(judged, r.quantity) : null,
+    band: src.bandSet ? bandLine(src.bandSet.bands, r.circuit, r.quantity) : null,
+    verdict: r.verdict,
+    verdictLabel: verdictLabel(r.verdict),
+    reason: r.reason,
+    temperature,
+    cable,
+  };
+}
+
+function asLeftOf(rts: ReturnToService | null): AsLeft | null {
+  if (!rts) return null;
+  const checks: Extract<AsLeft, { state: 'returned_to_production' }>['checks'] = [];
+  for (const key of ['faultCleared', 'tdcAgrees', 'stoppingTimeChecked'] as const) if (rts[key]) checks.push({ key, text: RETURN_TO_SERVICE_CHECKS[key] });
+  checks.push({ key: 'presenceSensing', text: rts.presenceSensingDistanceOk === 'yes' ? RETURN_TO_SERVICE_CHECKS.presenceSensingOk : RETURN_TO_SERVICE_CHECKS.presenceSensingNotFitted });
+  return { state: 'returned_to_production', label: AS_LEFT_LABELS.returned_to_production, checks, stoppingTimeMs: rts.stoppingTimeMs ?? null };
+}
+
+function safetyOf(onPath: Step[]): VisitRecord['safety'] {
+  const byText = new Map<string, VisitRecord['safety'][number]>();
+  for (const step of onPath) {
+    if (!step.safety) continue;
+    const known = byText.get(step.safety.text);
+    if (known) known.appliedAt.push(step.title);
+    else byText.set(step.safety.text, { signalWord: step.safety.signalWord, text: step.safety.text, appliedAt: [step.title] });
+  }
+  byText.set(RETURN_TO_SERVICE.text, { signalWord: RETURN_TO_SERVICE.signalWord, text: RETURN_TO_SERVICE.text, appliedAt: ['Return to service'] });
+  return [...byText.values()];
+}
+
+const minutesBetween = (from: string | null, to: string | null) => (from && to ? (Date.parse(to) - Date.parse(from)) / 60_000 : null);
+
+/** The one visit record every rendering shows, from what the server read. Pure: same source, same record. */
+export function buildVisitRecord(src: VisitRecordSource): VisitRecord {
+  const { visit, procedure } = src;
+  const steps = new Map(procedure.definition.steps.map((s) => [s.id, s]));
+  const stepTitles = new Map(procedure.definition.steps.map((s) => [s.id, s.title]));
+  const currentResults = src.results.filter((r) => r.supersededAt === null);
+  const resultByStep = new Map(currentResults.map((r) => [r.stepId, r]));
+  const traversal = traverseProcedure(
+    procedure.definition,
+    currentResults.filter((r) => r.outcome !== null).map((r) => ({ stepId: r.stepId, outcome: r.outcome! })),
+  );
+  const finding = traversal.findings[0] ?? null;
+  const onPath = new Set(traversal.path.map((p) => p.stepId));
+  const current = src.readings.filter((r) => r.supersededAt === null);
+  const reference = visitReference(visit.id);
+  const corrected = (src.issue?.number ?? 1) > 1;
+
+  const pathSteps: RecordPathStep[] = traversal.path.map((p) => {
+    const step = steps.get(p.stepId)!;
+    const result = resultByStep.get(p.stepId);
+    const outcome = 'outcomes' in step ? step.outcomes.find((o) => o.value === p.outcome) : undefined;
+    const inputs = result?.inputs ?? {};
+    const gate = step.kind === 'safety_gate';
+    return {
+      stepId: p.stepId,
+      title: step.title,
+      kind: step.kind,
+      answer: outcome?.label ?? p.outcome,
+      confirmations: gate ? step.confirmations : [],
+      confirmedAt: result?.confirmedAt ?? null,
+      confirmedBy: gate && result?.confirmedAt ? (src.people[result.createdBy] ?? null) : null,
+      details: (step.inputs ?? []).filter((i) => inputs[i.key]).map((i) => `${i.label}: ${String(inputs[i.key])}`),
+      note: result?.note ?? null,
+    };
+  });
+
+  return {
+    timeZone: src.timeZone,
+    companyName: src.companyName,
+    header: {
+      visitId: visit.id,
+      reference,
+      status: visit.status,
+      statusLabel: VISIT_STATUS_LABELS[visit.status],
+      customer: src.customer,
+      site: src.site,
+      siteLine: [src.site.name, src.site.address, src.site.city].filter(Boolean).join(', '),
+      press: src.press,
+      pressLine: pressLine(src.press),
+      technician: { name: src.technicianName },
+      startedAt: visit.startedAt,
+      closedAt: visit.closedAt,
+      faultDisplayed: visit.faultDisplayed,
+      procedure: { title: procedure.title, version: procedure.version },
+      bandSet: src.bandSet
+        ? { label: src.bandSet.label, generation: src.bandSet.generation, version: src.bandSet.version, referenceTemperatureC: src.bandSet.bands.referenceTemperatureC, invented: src.bandSet.bands.invented }
+        : null,
+      bandSetLine: src.bandSet ? `${src.bandSet.label}, version ${src.bandSet.version}${src.bandSet.bands.invented ? ' (invented demo values)' : ''}` : 'None chosen',
+    },
+    issue: src.issue ? { number: src.issue.number, corrected, issuedAt: src.issue.issuedAt, expiresAt: src.issue.expiresAt } : null,
+    title: reportTitle(reference, corrected),
+    path: {
+      steps: pathSteps,
+      finding: finding && finding.kind === 'finding' ? { title: finding.title, conclusion: finding.conclusion, recommendedAction: finding.recommendedAction, escalate: finding.escalate } : null,
+      noLongerApply: traversal.unusedAnswers.length,
+    },
+    // Readings of steps on the path taken; answers left behind by a changed branch are not part of the record.
+    readings: { items: current.filter((r) => onPath.has(r.stepId)).map((r) => readingOf(src, stepTitles, r)), replaced: src.readings.length - current.length },
+    work: {
+      cause: { category: visit.causeCategory, label: visit.causeCategory ? CAUSE_LABELS[visit.causeCategory] : RECORD_WORDS.noCause },
+      actionsTaken: visit.actionsTaken,
+      recommendations: visit.recommendations,
+      firmware: { controlFound: visit.controlFirmwareFound, controlLeft: visit.controlFirmwareLeft, monitorFound: visit.monitorFirmwareFound, monitorLeft: visit.monitorFirmwareLeft },
+    },
+    parts: src.parts,
+    times: { labourMinutes: visit.labourMinutes, travelMinutes: visit.travelMinutes, repairMinutes: minutesBetween(visit.startedAt, visit.closedAt) },
+    asLeft: asLeftOf(visit.returnToService),
+    safety: safetyOf([...traversal.path.map((p) => steps.get(p.stepId)!), ...(finding ? [finding] : [])]),
+    photos: src.attachments
+      .filter((a) => a.kind === 'photo')
+      .map((a) => ({ id: a.id, caption: a.caption, stepTitle: a.stepId ? (stepTitles.get(a.stepId) ?? null) : null, hasThumb: a.hasThumb })),
+    signOff: {
+      contactName: visit.contactName,
+      contactEmail: visit.contactEmail,
+      signedAt: visit.signedAt,
+      signatureId: src.attachments.filter((a) => a.kind === 'signature').at(-1)?.id ?? null,
+      acknowledgement: src.issue?.acknowledgedAt ? { at: src.issue.acknowledgedAt, by: src.issue.acknowledgedBy } : null,
+    },
+  };
+}

@@ -1,0 +1,96 @@
+import { formatSi } from '../domain/format-quantity';
+import { formatQuantity } from '../format/quantity';
+import type { BandSetValues } from '../schemas/band-set';
+import type { Circuit, Quantity } from '../schemas/reading';
+
+// Sentences and section titles of the visit record. The builder and all four renderings read them
+// here: a wording or a section title changes in this file only.
+
+export const RECORD_SECTIONS = {
+  fault: 'Fault as found',
+  finding: 'Finding and cause',
+  path: 'Path through the procedure',
+  readings: 'Readings',
+  firmware: 'Firmware',
+  work: 'Work done',
+  parts: 'Parts used',
+  recommendations: 'Recommendations',
+  asLeft: 'Return to service',
+  safety: 'Safety statements that applied',
+  photos: 'Photos',
+  signOff: 'Customer’s sign-off',
+} as const;
+
+/** The names of the record's facts, as every rendering labels them. */
+export const RECORD_LABELS = {
+  status: 'Status',
+  customer: 'Customer',
+  site: 'Site',
+  press: 'Press',
+  visit: 'Visit',
+  started: 'Started',
+  closed: 'Closed',
+  technician: 'Technician',
+  bandSet: 'Reference band set',
+  fault: 'Fault as found',
+  rootCause: 'Root cause',
+  finding: 'Finding',
+  actionsTaken: 'Actions taken',
+  recommendations: 'Recommendations',
+  labour: 'Labour (h:mm)',
+  travel: 'Travel (h:mm)',
+  repair: 'Time to repair (h:mm)',
+  pressControl: 'Press control',
+  monitorModule: 'Monitor module',
+  signedBy: 'Signed by',
+  signed: 'Signed',
+  time: 'Time',
+} as const;
+
+export const RECORD_WORDS = {
+  notRecorded: '—',
+  noBandSet: 'No band set chosen',
+  noReadings: 'No readings were taken on the path this visit followed.',
+  noSteps: 'No step was answered.',
+  noParts: 'No parts were used.',
+  noRecommendations: 'None beyond the finding.',
+  noCause: 'Not recorded',
+  checksNotRecorded: 'The post-repair checks were not recorded.',
+  escalated: 'Escalated: the fault points to a processor board, beyond field repair.',
+  plantRulesFirst: "The plant's lockout procedure, local codes and licensed practice come first; this report does not replace them.",
+  correctedNotice: 'This corrected report replaces the one sent earlier for this visit; the earlier link no longer opens.',
+  emailSafety: "return the press to production only after the post-repair checks. The plant's lockout procedure, local codes and licensed practice come first.",
+} as const;
+
+export const replacedReadingsNote = (n: number) =>
+  `${n} reading(s) were typed again during the visit; the table shows the values that stand. The earlier values are kept in the visit’s record.`;
+export const noLongerApplyNote = (n: number) => `${n} earlier answer(s) were kept in the history but no longer apply after an answer changed.`;
+export const recommendedByProcedure = (action: string) => `Recommended by the procedure: ${action}`;
+export const stoppingTimeLine = (ms: number) => `Measured stopping time: ${formatQuantity(ms, 'ms')}.`;
+export const issueNotice = (number: number) => `Issue ${number}: this report replaces every earlier report of this visit.`;
+export const firmwareLine = (found: string | null, left: string | null) => `as found ${found ?? '—'} · as left ${left ?? '—'}`;
+export const signatureAlt = (name: string | null) => `Signature of ${name ?? 'the customer contact'}`;
+export const photoLabel = (index: number, caption: string | null, stepTitle: string | null) =>
+  [`Photo ${index + 1}`, caption, stepTitle ? `(${stepTitle})` : null].filter(Boolean).join(' ');
+export const acknowledgementLine = (when: string, by: string | null) => `Receipt acknowledged ${when}${by ? ` by ${by}` : ''}.`;
+
+export const RETURN_TO_SERVICE_CHECKS = {
+  faultCleared: 'The fault has cleared on the control.',
+  tdcAgrees: 'The crank-angle display reads top dead centre with the slide at the top.',
+  stoppingTimeChecked: 'The stopping-time / brake-monitor check passed.',
+  presenceSensingOk: 'Every presence-sensing device still sits at or beyond its safety distance for the measured stopping time.',
+  presenceSensingNotFitted: 'No presence-sensing device is fitted to this press.',
+} as const;
+
+export const AS_LEFT_LABELS = { returned_to_production: 'Returned to production after the return-to-service checks' } as const;
+
+/** The band a reading was judged against, in words, from the band-set version the visit pinned. */
+export function bandLine(bands: BandSetValues, circuit: Circuit, quantity: Quantity): string {
+  if (quantity === 'resistance') {
+    const w = bands.windings[circuit];
+    return `${formatSi(w.nominal, 'resistance')} ± ${w.inBandPercent} % at ${bands.referenceTemperatureC} °C (near edge ± ${w.nearEdgePercent} %)`;
+  }
+  if (circuit === 'rotor') return `Excitation ${formatSi(bands.excitation.min, 'ac_voltage')} to ${formatSi(bands.excitation.max, 'ac_voltage')} RMS`;
+  const m = bands.statorOutputMagnitude;
+  return `Stator pair √(S1² + S2²) ${formatSi(m.min, 'ac_voltage')} to ${formatSi(m.max, 'ac_voltage')} RMS`;
+}
