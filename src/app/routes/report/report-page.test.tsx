@@ -38,7 +38,7 @@ describe('the customer report page', () => {
     expect(await screen.findByRole('heading', { level: 1, name: 'Service report V-000042' })).toBeInTheDocument();
     expect(screen.getByText('Harlow Stamping Works (invented)')).toBeInTheDocument();
     expect(screen.getByText('V-000042 · started 2 Dec 2026, 08:00 UTC · closed 2 Dec 2026, 09:35 UTC')).toBeInTheDocument();
-    const rotor = screen.getAllByRole('row', { name: /Rotor R1–R2 Control end/ })[0]!;
+    const rotor = screen.getAllByRole('row', { name: /Rotor R1–R2/ })[0]!;
     expect(within(rotor).getByText('Open circuit')).toBeInTheDocument();
     expect(within(rotor).getByText('120 Ω ± 8 % at 20 °C (near edge ± 15 %)')).toBeInTheDocument();
     expect(screen.getByText('1:35')).toBeInTheDocument();
@@ -52,7 +52,7 @@ describe('the customer report page', () => {
     expect(name).toHaveValue('Ines Varga (invented)');
     await user.click(screen.getByRole('button', { name: 'Acknowledge receipt' }));
 
-    expect(await screen.findByText(/Acknowledged on .+ by Pat Plant \(invented\)\./)).toBeInTheDocument();
+    expect(await screen.findByText(/Acknowledged on .+ by Ines Varga \(invented\)\./)).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Acknowledge receipt' })).not.toBeInTheDocument();
     expect(api.callsTo('POST', `/api/report/${TOKEN}/acknowledge`)[0]!.body).toEqual({ name: 'Ines Varga (invented)' });
   });
