@@ -1,13 +1,13 @@
 import type { Transaction } from 'sequelize';
 import type { SessionUser } from '../../../shared/schemas/session';
+import { visitReference } from '../../../shared/format/visit-reference';
 import { AppError } from '../../lib/errors';
 import { Visit } from './visits.model';
 
 export const WRITABLE_STATUSES = ['draft', 'in_progress'] as const;
 
-export function visitReference(id: number): string {
-  return `V-${String(id).padStart(6, '0')}`;
-}
+// One reference format for the server, the record and the screens.
+export { visitReference };
 
 /**
  * A technician reaches only visits assigned to them; managers and admins reach every visit (DESIGN.md §2).
