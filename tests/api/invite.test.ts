@@ -1,6 +1,7 @@
 import supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { INVITE_LIFETIME_MS, hashInviteToken } from '../../server/modules/admin/invite-token';
+import { renderLinks } from '../../server/modules/emails/email-links';
 import { signedInAgent, useApiApp } from '../api-app';
 import { makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
@@ -19,15 +20,18 @@ beforeAll(async () => {
 
 const query = async <T>(sql: string, replacements: Record<string, unknown>) => (await db.sequelize.query(sql, { replacements }))[0] as T[];
 
-/** The invitation link as it went into the outbox: the only place the raw token exists. */
-async function linkMailedTo(email: string): Promise<{ url: URL; token: string; row: { subject: string; text: string; html: string; kind: string; created_by: number } }> {
-  const rows = await query<{ subject: string; text: string; html: string; kind: string; created_by: number }>(
-    `SELECT subject, text, html, kind, created_by FROM emails WHERE to_address = :email ORDER BY id DESC LIMIT 1`,
+type StoredEmail = { subject: string; text: string; html: string; kind: string; created_by: number; link_kind: 'invite' | null; link_ref: number | null };
+
+/** The invitation link as the outbox renders it when sending: the stored row holds only a marker. */
+async function linkMailedTo(email: string): Promise<{ url: URL; token: string; row: StoredEmail; sent: { text: string; html: string } }> {
+  const rows = await query<StoredEmail>(
+    `SELECT subject, text, html, kind, created_by, link_kind, link_ref FROM emails WHERE to_address = :email ORDER BY id DESC LIMIT 1`,
     { email },
   );
   const row = rows[0]!;
-  const url = new URL(/https:\/\/\S+/.exec(row.text)![0]);
-  return { url, token: url.pathname.split('/').pop()!, row };
+  const sent = await renderLinks({ linkKind: row.link_kind, linkRef: row.link_ref, html: row.html, text: row.text });
+  const url = new URL(/https:\/\/\S+/.exec(sent.text)![0]);
+  return { url, token: url.pathname.split('/').pop()!, row, sent };
 }
 
 async function invite(email: string, role = 'technician') {
@@ -41,11 +45,15 @@ describe('inviting a person by e-mail', () => {
     const user = await invite('ina@test.example');
     expect(user.status).toBe('invited');
 
-    const { url, token, row } = await linkMailedTo('ina@test.example');
-    expect(row).toMatchObject({ kind: 'user_invite', subject: 'Your Crankwise invitation', created_by: adminId });
+    const { url, token, row, sent } = await linkMailedTo('ina@test.example');
+    expect(row).toMatchObject({ kind: 'user_invite', subject: 'Your Crankwise invitation', created_by: adminId, link_kind: 'invite' });
     expect(url.origin).toBe('https://service.test.example');
     expect(url.pathname).toBe(`/accept-invite/${token}`);
-    expect(row.html).toContain(url.toString());
+    expect(sent.html).toContain(url.toString());
+    // The stored e-mail holds no usable link: only the marker the outbox fills in when it sends.
+    expect(row.text).not.toContain(token);
+    expect(row.html).not.toContain(token);
+    expect(row.text).toContain('{{link}}');
 
     const stored = await query<{ token_hash: string; expires_at: Date }>(`SELECT token_hash, expires_at FROM user_invites WHERE user_id = :id`, { id: user.id });
     expect(stored).toHaveLength(1);

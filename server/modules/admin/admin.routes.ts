@@ -7,10 +7,10 @@ import { adminUserRoutes } from './admin-users.routes';
 import { outboxInviteMailer } from './invite-email';
 
 /** Everything under /api/admin is for administrators only (DESIGN.md §2): one guard in front of all of it. */
-export function adminRoutes(deps: { publicBaseUrl: string }): Router {
+export function adminRoutes(): Router {
   const router = Router();
   router.use(requireRole('admin'));
-  router.use('/users', adminUserRoutes(outboxInviteMailer(deps.publicBaseUrl)));
+  router.use('/users', adminUserRoutes(outboxInviteMailer));
   router.use('/band-sets', adminBandSetRoutes());
   router.use('/procedures', adminProcedureRoutes());
   router.use('/firmware-rules', adminFirmwareRuleRoutes());
