@@ -25,9 +25,11 @@ import { makeTestBandSet, workToResistanceStep } from '../visit-steps';
 // PostgreSQL binaries here to make a throwaway cluster with.
 const ownClusters = Boolean(process.env.TEST_PG_CLUSTER_DIR);
 const DATABASE = 'crankwise_restart';
-// The cluster's parent folder is made world-readable by startCluster, so it is one of our own.
+// A folder of our own; startCluster may put the cluster elsewhere (a place the postgres user can
+// enter), so the cluster's own dir is used for restarts and removal.
 const root = fs.mkdtempSync(path.join(os.tmpdir(), 'crankwise-restart-'));
 const clusterDir = path.join(root, 'pg');
+let actualDir = '';
 let cluster: Cluster | undefined;
 let sequelize: Sequelize | undefined;
 let server: http.Server | undefined;
@@ -44,6 +46,7 @@ beforeAll(async () => {
   if (!ownClusters) return;
   process.on('uncaughtException', onUncaught);
   cluster = await startCluster(clusterDir, { preferredPort: 0, throwaway: true });
+  actualDir = cluster.dir;
   await ensureDatabase(cluster.adminUrl(), DATABASE);
   const url = appUrl(cluster.adminUrl(), DATABASE);
   sequelize = createSequelize(url);
@@ -75,6 +78,12 @@ afterAll(async () => {
   await closeApp?.();
   await sequelize?.close();
   cluster?.stop();
+  if (actualDir) {
+    fs.rmSync(actualDir, { recursive: true, force: true });
+    // Outside our folder the cluster sits in a parent made for it alone: remove that too when empty.
+    const parent = path.dirname(actualDir);
+    if (parent !== root && fs.existsSync(parent) && fs.readdirSync(parent).length === 0) fs.rmdirSync(parent);
+  }
   fs.rmSync(root, { recursive: true, force: true });
   if (uploadDir) fs.rmSync(uploadDir, { recursive: true, force: true });
 }, 60_000);
@@ -99,7 +108,7 @@ function restartInChild(): Promise<{ startedAt: number; doneAt: number }> {
   const startedAt = Date.now();
   const script = "import('./scripts/lib/pg-cluster.ts').then((m) => m.restartCluster(process.env.RESTART_DIR))";
   return new Promise((resolve, reject) => {
-    execFile('node_modules/.bin/tsx', ['-e', script], { env: { ...process.env, RESTART_DIR: clusterDir }, timeout: 90_000 }, (err, _out, stderr) =>
+    execFile('node_modules/.bin/tsx', ['-e', script], { env: { ...process.env, RESTART_DIR: actualDir }, timeout: 90_000 }, (err, _out, stderr) =>
       err ? reject(new Error(`restart failed: ${stderr || err.message}`)) : resolve({ startedAt, doneAt: Date.now() }),
     );
   });
@@ -166,6 +175,7 @@ describe.skipIf(!ownClusters)('a PostgreSQL restart under a loop of reading save
     expect(uncaught).toEqual([]);
 
     cluster = await startCluster(clusterDir, { preferredPort: port, throwaway: true });
+    expect(cluster.dir).toBe(actualDir);
     expect(cluster.port).toBe(port);
     const backAt = Date.now();
     let healthy = 0;
