@@ -12,6 +12,8 @@ import type { Env } from './config/env';
 import { initModels } from './db/models';
 import { errorHandler, unknownRoute } from './lib/errors';
 import { logger } from './lib/logger';
+import { sameOriginJson } from './lib/same-origin';
+import { refuseUnstorableText } from './lib/storable-body';
 import { adminRoutes } from './modules/admin/admin.routes';
 import { inviteRoutes } from './modules/admin/invites.routes';
 import { attachmentRoutes } from './modules/attachments/attachments.routes';
@@ -91,6 +93,9 @@ export function createApp({ env, sequelize }: AppDeps): CrankwiseApp {
   });
 
   const api = express.Router();
+  // State changes only from our own pages, as JSON; text the database cannot store never reaches it.
+  api.use(sameOriginJson({ publicBaseUrl: env.PUBLIC_BASE_URL, multipartPaths: [/^\/visits\/[^/]+\/attachments\/?$/] }));
+  api.use(refuseUnstorableText);
   api.use('/health', healthRoutes(sequelize));
   api.use('/session', sessionRoutes({ signInLimit: env.SIGNIN_RATE_LIMIT, signInWindowMs: env.SIGNIN_RATE_WINDOW_MS }));
   api.use('/customers', customerRoutes());
