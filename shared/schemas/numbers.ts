@@ -12,8 +12,9 @@ const ID_TEXT = /^[1-9][0-9]*$/;
 const WHOLE_TEXT = /^\s*-?[0-9]+\s*$/;
 const DECIMAL_TEXT = /^\s*-?[0-9]+(\.[0-9]+)?\s*$/;
 
+// Each branch carries the message too: a form resolver shows the first branch's issue of a union.
 function numberFrom(pattern: RegExp, message: string) {
-  return z.union([z.number(), z.string().regex(pattern).transform(Number)], { error: message });
+  return z.union([z.number(message), z.string(message).regex(pattern, message).transform(Number)], { error: message });
 }
 
 /** A row id: a whole number from 1 to 2,147,483,647, written only with digits in an address. */

@@ -101,7 +101,7 @@ export const partUsedSchema = z.object({
   id: uuid,
   partNumber: nameText({ min: 1, minMessage: 'Enter the part number from the label', max: 60 }),
   description: text({ max: 200 }).default(''),
-  quantity: wholeNumber({ min: 1, max: 1000, message: 'Quantity is a whole number', minMessage: 'Quantity is at least 1' }),
+  quantity: wholeNumber({ min: 1, max: 1000, message: 'Enter the quantity as a whole number, e.g. 1', minMessage: 'Quantity is at least 1' }),
   serialRemoved: nameText({ max: 60 }).optional(),
   serialFitted: nameText({ max: 60 }).optional(),
 });
@@ -112,7 +112,7 @@ export const returnToServiceSchema = z.object({
   faultCleared: z.literal(true, 'Confirm the fault has cleared on the control'),
   tdcAgrees: z.literal(true, 'Confirm the crank-angle display reads top dead centre with the slide at top'),
   stoppingTimeChecked: z.literal(true, 'Confirm the stopping-time / brake-monitor check passed'),
-  stoppingTimeMs: decimalNumber({ min: 0.001, max: 5000, message: 'Type the stopping time in milliseconds, such as 180', minMessage: 'The stopping time is above 0 ms' }).optional(),
+  stoppingTimeMs: decimalNumber({ min: 0.001, max: 5000, message: 'Enter the stopping time in milliseconds, e.g. 180, or leave it empty', minMessage: 'The stopping time is above 0 ms' }).optional(),
   presenceSensingDistanceOk: z.enum(['yes', 'not_fitted'], 'Say whether the presence-sensing device still sits at a safe distance'),
 });
 export type ReturnToService = z.infer<typeof returnToServiceSchema>;
@@ -132,8 +132,8 @@ export const closeOutSchema = z.object({
   actionsTaken: text({ min: 3, minMessage: 'Describe what you did', max: 4000 }),
   recommendations: text({ max: 4000 }).optional(),
   parts: z.array(partUsedSchema).max(50).default([]),
-  labourMinutes: wholeNumber({ min: 0, max: 10_000, message: 'Type the labour time in whole minutes, such as 95' }),
-  travelMinutes: wholeNumber({ min: 0, max: 10_000, message: 'Type the travel time in whole minutes, such as 40' }),
+  labourMinutes: wholeNumber({ min: 0, max: 10_000, message: 'Enter the labour time in whole minutes, e.g. 90' }),
+  travelMinutes: wholeNumber({ min: 0, max: 10_000, message: 'Enter the travel time in whole minutes, e.g. 45 (0 if none)' }),
   controlFirmwareLeft: versionText,
   monitorFirmwareLeft: versionText,
   returnToService: returnToServiceSchema,
