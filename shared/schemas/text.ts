@@ -7,10 +7,19 @@ import { z } from 'zod';
 // (U+202A–U+202E, U+2066–U+2069) make a line read in a different order than it was typed.
 // Right-to-left script itself needs none of them: the Unicode bidirectional algorithm orders it.
 
-const CONTROL_NOT_LINE = /[\u0001-\u0008\u000B\u000C\u000E-\u001F\u007F-\u009F]/;
-const LINE_BREAK_OR_TAB = /[\t\n\r]/;
 const DIRECTION_OVERRIDE = /[\u202A-\u202E\u2066-\u2069]/;
 const LONE_SURROGATE = /[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/;
+
+/** The first C0 or C1 control character (tab, CR and LF count only in a single-line text). */
+function firstControl(value: string, singleLine: boolean): string | null {
+  for (const ch of value) {
+    const code = ch.codePointAt(0)!;
+    if (code >= 0x20 && (code < 0x7f || code > 0x9f)) continue;
+    if (!singleLine && (code === 0x09 || code === 0x0a || code === 0x0d)) continue;
+    return ch;
+  }
+  return null;
+}
 
 const hex = (ch: string) => `U+${ch.charCodeAt(0).toString(16).toUpperCase().padStart(4, '0')}`;
 
@@ -25,9 +34,9 @@ export function storageProblem(value: string): string | null {
 export function unstorableText(value: string, { singleLine = false } = {}): string | null {
   const stored = storageProblem(value);
   if (stored) return stored;
-  const control = CONTROL_NOT_LINE.exec(value);
-  if (control) return `Remove the control character (${hex(control[0])}); it is invisible and cannot be printed. Retype the text if it was pasted.`;
-  if (singleLine && LINE_BREAK_OR_TAB.test(value)) return 'A name fits on one line: remove the line break or tab.';
+  const control = firstControl(value, singleLine);
+  if (control === '\t' || control === '\n' || control === '\r') return 'A name fits on one line: remove the line break or tab.';
+  if (control) return `Remove the control character (${hex(control)}); it is invisible and cannot be printed. Retype the text if it was pasted.`;
   const direction = DIRECTION_OVERRIDE.exec(value);
   if (direction) return `Remove the direction control character (${hex(direction[0])}): it makes the text read in a different order than it was typed.`;
   return null;
