@@ -13,6 +13,8 @@ import { initModels } from './db/models';
 import { errorHandler, unknownRoute } from './lib/errors';
 import { logger, redactUrl } from './lib/logger';
 import { requestClientContext } from './lib/request-context';
+import { sameOriginJson } from './lib/same-origin';
+import { refuseUnstorableText } from './lib/storable-body';
 import { adminRoutes } from './modules/admin/admin.routes';
 import { inviteRoutes } from './modules/admin/invites.routes';
 import { attachmentRoutes } from './modules/attachments/attachments.routes';
@@ -101,6 +103,9 @@ export function createApp({ env, sequelize }: AppDeps): CrankwiseApp {
 
   const api = express.Router();
   api.use(noStoreByDefault);
+  // State changes only from our own pages, as JSON; text the database cannot store never reaches it.
+  api.use(sameOriginJson({ publicBaseUrl: env.PUBLIC_BASE_URL, multipartPaths: [/^\/visits\/[^/]+\/attachments\/?$/] }));
+  api.use(refuseUnstorableText);
   api.use('/health', healthRoutes(sequelize));
   api.use('/session', sessionRoutes(signInThrottle(sequelize, { perAccount: env.SIGNIN_RATE_LIMIT, perAddress: env.SIGNIN_ADDRESS_LIMIT, windowMs: env.SIGNIN_RATE_WINDOW_MS })));
   api.use('/customers', customerRoutes());

@@ -2,7 +2,7 @@ import supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { INVITE_LIFETIME_MS, hashInviteToken } from '../../server/modules/admin/invite-token';
 import { renderLinks } from '../../server/modules/emails/email-links';
-import { signedInAgent, useApiApp } from '../api-app';
+import { anonymous, signedInAgent, useApiApp } from '../api-app';
 import { makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
 
@@ -65,7 +65,7 @@ describe('inviting a person by e-mail', () => {
     expect(lifetime).toBeGreaterThan(INVITE_LIFETIME_MS - 60_000);
     expect(lifetime).toBeLessThanOrEqual(INVITE_LIFETIME_MS);
 
-    const signIn = await supertest(app()).post('/api/session').send({ email: 'ina@test.example', password: NEW_PASSWORD });
+    const signIn = await anonymous(app()).post('/api/session').send({ email: 'ina@test.example', password: NEW_PASSWORD });
     expect(signIn.status).toBe(401);
   });
 
@@ -77,25 +77,25 @@ describe('inviting a person by e-mail', () => {
     expect(preview.status).toBe(200);
     expect(preview.body).toMatchObject({ email: 'once@test.example', name: 'Ina Invited' });
 
-    const accepted = await supertest(app()).post(`/api/invites/${token}/accept`).send({ password: NEW_PASSWORD });
+    const accepted = await anonymous(app()).post(`/api/invites/${token}/accept`).send({ password: NEW_PASSWORD });
     expect(accepted.status).toBe(200);
     expect(accepted.body).toEqual({ email: 'once@test.example' });
 
-    const signIn = await supertest(app()).post('/api/session').send({ email: 'once@test.example', password: NEW_PASSWORD });
+    const signIn = await anonymous(app()).post('/api/session').send({ email: 'once@test.example', password: NEW_PASSWORD });
     expect(signIn.status).toBe(200);
     expect(signIn.body.user.role).toBe('manager');
 
-    const again = await supertest(app()).post(`/api/invites/${token}/accept`).send({ password: 'someone else tries this' });
+    const again = await anonymous(app()).post(`/api/invites/${token}/accept`).send({ password: 'someone else tries this' });
     expect(again.status).toBe(410);
     expect(again.body.error.message).toMatch(/already been used/);
-    const stillOld = await supertest(app()).post('/api/session').send({ email: 'once@test.example', password: NEW_PASSWORD });
+    const stillOld = await anonymous(app()).post('/api/session').send({ email: 'once@test.example', password: NEW_PASSWORD });
     expect(stillOld.status).toBe(200);
   });
 
   it('refuses a password shorter than 12 characters, naming the field', async () => {
     await invite('short@test.example');
     const { token } = await linkMailedTo('short@test.example');
-    const res = await supertest(app()).post(`/api/invites/${token}/accept`).send({ password: 'eleven-char' });
+    const res = await anonymous(app()).post(`/api/invites/${token}/accept`).send({ password: 'eleven-char' });
     expect(res.status).toBe(400);
     expect(res.body.error.fields.password).toMatch(/at least 12 characters/);
     expect((await supertest(app()).get(`/api/invites/${token}`)).status).toBe(200);
@@ -105,7 +105,7 @@ describe('inviting a person by e-mail', () => {
     const user = await invite('late@test.example');
     const { token } = await linkMailedTo('late@test.example');
     await db.sequelize.query(`UPDATE user_invites SET expires_at = now() - interval '1 minute' WHERE user_id = :id`, { replacements: { id: user.id } });
-    const res = await supertest(app()).post(`/api/invites/${token}/accept`).send({ password: NEW_PASSWORD });
+    const res = await anonymous(app()).post(`/api/invites/${token}/accept`).send({ password: NEW_PASSWORD });
     expect(res.status).toBe(410);
     expect(res.body.error.message).toMatch(/expired/);
     const list = await admin.get('/api/admin/users');
@@ -119,8 +119,8 @@ describe('inviting a person by e-mail', () => {
     expect(res.status).toBe(200);
     const second = (await linkMailedTo('resend@test.example')).token;
     expect(second).not.toBe(first);
-    expect((await supertest(app()).post(`/api/invites/${first}/accept`).send({ password: NEW_PASSWORD })).status).toBe(410);
-    expect((await supertest(app()).post(`/api/invites/${second}/accept`).send({ password: NEW_PASSWORD })).status).toBe(200);
+    expect((await anonymous(app()).post(`/api/invites/${first}/accept`).send({ password: NEW_PASSWORD })).status).toBe(410);
+    expect((await anonymous(app()).post(`/api/invites/${second}/accept`).send({ password: NEW_PASSWORD })).status).toBe(200);
     expect((await admin.post(`/api/admin/users/${user.id}/invite`)).status).toBe(409);
   });
 
@@ -128,7 +128,7 @@ describe('inviting a person by e-mail', () => {
     const user = await invite('withdrawn@test.example');
     const { token } = await linkMailedTo('withdrawn@test.example');
     await admin.patch(`/api/admin/users/${user.id}`).send({ active: false }).expect(200);
-    expect((await supertest(app()).post(`/api/invites/${token}/accept`).send({ password: NEW_PASSWORD })).status).toBe(410);
+    expect((await anonymous(app()).post(`/api/invites/${token}/accept`).send({ password: NEW_PASSWORD })).status).toBe(410);
     const reactivate = await admin.patch(`/api/admin/users/${user.id}`).send({ active: true });
     expect(reactivate.status).toBe(409);
     expect(reactivate.body.error.message).toMatch(/Resend the invitation/);

@@ -1,14 +1,14 @@
 import { randomUUID } from 'node:crypto';
 import { PDFParse } from 'pdf-parse';
 import sharp from 'sharp';
-import supertest from 'supertest';
+import type supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { loadEnv } from '../../server/config/env';
 import { ReportIssue } from '../../server/modules/reports/report-issues.model';
 import { renderLinks } from '../../server/modules/emails/email-links';
 import { readReportLink, reportLinkKey, signReportLink } from '../../server/modules/reports/report-link';
 import type { ReportView } from '../../server/modules/reports/report-view';
-import { signedInAgent, useApiApp } from '../api-app';
+import { anonymous, signedInAgent, useApiApp } from '../api-app';
 import { makePress, makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
 import { answer, makeTestBandSet, reading, signaturePng, windingReadings, workToResistanceStep } from '../visit-steps';
@@ -79,7 +79,7 @@ async function pdfText(pdf: Buffer): Promise<string> {
   }
 }
 
-const publicApi = () => supertest(app());
+const publicApi = () => anonymous(app());
 
 describe('closing a visit queues its report', () => {
   it('puts one report e-mail with the PDF in the outbox in the same transaction as the close', async () => {

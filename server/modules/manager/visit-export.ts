@@ -25,11 +25,15 @@ export function exportHeader(tz: string): string[] {
   ];
 }
 
-/** The CSV export of the filtered visits, produced batch by batch for the route to write as it goes. */
+/**
+ * The CSV export of the filtered visits, produced batch by batch for the route to write as it goes.
+ * The first chunk (header and first batch) comes only after the first query has answered.
+ */
 export async function* visitCsvChunks(filter: VisitTableFilter): AsyncGenerator<string> {
-  yield UTF8_BOM + csvRecord(exportHeader(filter.tz));
+  let header = UTF8_BOM + csvRecord(exportHeader(filter.tz));
   for await (const batch of visitBatches(filter)) {
-    yield batch
+    yield header +
+      batch
       .map((r) =>
         csvRecord([
           r.reference,
@@ -51,5 +55,7 @@ export async function* visitCsvChunks(filter: VisitTableFilter): AsyncGenerator<
         ]),
       )
       .join('');
+    header = '';
   }
+  if (header) yield header;
 }
