@@ -1,4 +1,5 @@
 import { randomUUID } from 'node:crypto';
+import fs from 'node:fs/promises';
 import { DatabaseError, UniqueConstraintError } from 'sequelize';
 import type { SessionUser } from '../../../shared/schemas/session';
 import { AppError } from '../../lib/errors';
@@ -10,11 +11,18 @@ import { deleteAttachment, findAttachment, findAttachmentsByIds, insertAttachmen
 import { MAX_PHOTOS_PER_UPLOAD, type AttachmentDto, type AttachmentListQuery, type PhotoUploadFields } from './attachments.schema';
 import type { FileStorage, StoredFile } from './storage';
 
-export interface IncomingPhoto {
-  bytes: Buffer;
+/** One photo of an upload: its bytes, or the temp file multer streamed them to. */
+export type IncomingPhoto = (
+  | { bytes: Buffer }
+  | { path: string; size: number }
+) & {
   /** The name the tablet gave the file: used in messages only, never for the type or the stored name. */
   originalName: string;
-}
+};
+
+const sizeOf = (photo: IncomingPhoto) => ('bytes' in photo ? photo.bytes.length : photo.size);
+/** Read one at a time while processing, so an upload never sits in memory whole. */
+const bytesOf = (photo: IncomingPhoto) => ('bytes' in photo ? Promise.resolve(photo.bytes) : fs.readFile(photo.path));
 
 export interface AttachmentServiceDeps {
   storage: FileStorage;
@@ -132,6 +140,11 @@ export function createAttachmentService({ storage, maxUploadBytes }: AttachmentS
   }
 
   return {
+    /** The access an upload needs, checked before its body is read. */
+    async checkUploadAccess(user: SessionUser, visitId: number): Promise<void> {
+      await loadVisitForWrite(user, visitId);
+    },
+
     async list(user: SessionUser, visitId: number, q: AttachmentListQuery = {}): Promise<AttachmentDto[]> {
       await loadVisitForRead(user, visitId);
       return (await listAttachments(visitId, q)).map(toAttachmentDto);
@@ -142,6 +155,7 @@ export function createAttachmentService({ storage, maxUploadBytes }: AttachmentS
      * was already stored by an earlier try with the same ids.
      */
     async uploadPhotos(user: SessionUser, visitId: number, files: IncomingPhoto[], fields: PhotoUploadFields): Promise<{ created: boolean; items: AttachmentDto[] }> {
+      // Checked before the body was read (checkUploadAccess) and again now: the visit may have closed meanwhile.
       await loadVisitForWrite(user, visitId);
       if (files.length === 0) {
         throw new AppError(400, 'no_file', `No photo arrived. Choose or take up to ${MAX_PHOTOS_PER_UPLOAD} photos and send them in the form field "photos".`);
@@ -153,9 +167,9 @@ export function createAttachmentService({ storage, maxUploadBytes }: AttachmentS
       // Every photo is checked and re-encoded before the first one is stored.
       const processed = [];
       for (const p of fresh) {
-        if (p.file.bytes.length > maxUploadBytes) throw tooLarge(maxUploadBytes);
+        if (sizeOf(p.file) > maxUploadBytes) throw tooLarge(maxUploadBytes);
         try {
-          processed.push({ id: p.id, kind: 'photo' as const, stepId: fields.stepId ?? null, caption: p.caption, image: await processImage(p.file.bytes) });
+          processed.push({ id: p.id, kind: 'photo' as const, stepId: fields.stepId ?? null, caption: p.caption, image: await processImage(await bytesOf(p.file)) });
         } catch (err) {
           if (err instanceof AppError) throw new AppError(err.status, err.code, `${p.label} ${err.message} Nothing from this upload was stored.`);
           throw err;
