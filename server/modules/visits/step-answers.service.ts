@@ -9,6 +9,7 @@ import { audit } from '../audit/audit';
 import { loadVisitForWrite } from './visit-access';
 import { bandValues, findStep, latestPublishedBandSet, loadVisitContext, type VisitContext } from './visit-context';
 import { missingReadings, stepReadings, toReadingInput, traverse } from './visit-state';
+import { SavedMeanwhile, saveOnce } from './save-once';
 import { StepResult } from './visit-work.model';
 import { rejudgeVisitReadings } from './readings.service';
 import { detailById, getVisitDetail } from './visits.service';
@@ -89,14 +90,21 @@ async function decideOutcome(ctx: VisitContext, step: Step, input: StepAnswerInp
  * already answered supersedes the old one (kept as history), and the branching is re-run.
  */
 export async function answerStep(user: SessionUser, visitId: number, stepId: string, input: StepAnswerInput) {
-  const existing = await StepResult.findByPk(input.id);
-  if (existing) {
+  const stored = async () => {
+    const existing = await StepResult.findByPk(input.id);
+    if (!existing) return null;
     if (existing.visitId !== visitId || existing.stepId !== stepId) throw new AppError(409, 'id_reused', 'That save id belongs to another answer. Reload the visit.');
     // A retry gets its stored answer back, even after the visit has closed.
     return getVisitDetail(user, visitId);
-  }
+  };
+  return saveOnce(stored, () => storeAnswer(user, visitId, stepId, input));
+}
+
+async function storeAnswer(user: SessionUser, visitId: number, stepId: string, input: StepAnswerInput) {
   return Visit.sequelize!.transaction(async (transaction) => {
     const visit = await loadVisitForWrite(user, visitId, transaction);
+    // A retry that waited for the row lock behind its first try finds that try's answer now.
+    if (await StepResult.findByPk(input.id, { transaction })) throw new SavedMeanwhile();
     const ctx = await loadVisitContext(visit, transaction);
     const step = findStep(ctx, stepId);
     assertReachable(ctx, stepId);
