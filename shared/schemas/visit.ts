@@ -69,7 +69,11 @@ export const stepAnswerInputSchema = z.object({
   outcome: z.string().max(64).optional(),
   /** A safety gate needs every confirmation ticked; the server records who and when. */
   confirmed: z.boolean().optional(),
-  inputs: z.record(z.string(), z.string().trim().max(200)).optional(),
+  /** Only the keys the step declares are taken (checked against the pinned procedure by the server). */
+  inputs: z
+    .record(z.string().max(64, 'An input name is at most 64 characters'), z.string().trim().max(200, 'Keep each input under 200 characters'))
+    .refine((inputs) => Object.keys(inputs).length <= 20, 'A step takes at most 20 inputs')
+    .optional(),
   note: z.string().trim().max(2000).optional(),
 });
 export type StepAnswerInput = z.infer<typeof stepAnswerInputSchema>;

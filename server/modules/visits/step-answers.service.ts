@@ -1,6 +1,7 @@
 import type { Transaction } from 'sequelize';
 import { evaluateFirmware } from '../../../shared/domain/firmware-compatibility';
 import { judgeMeasurements } from '../../../shared/domain/judge-measurements';
+import { FIRMWARE_UNREADABLE, FIRMWARE_VERSION_HINT, isFirmwareVersionAnswer } from '../../../shared/schemas/firmware-version';
 import type { Step } from '../../../shared/schemas/procedure';
 import type { SessionUser } from '../../../shared/schemas/session';
 import type { StepAnswerInput } from '../../../shared/schemas/visit';
@@ -40,8 +41,16 @@ async function pinGeneration(ctx: VisitContext, generation: string, transaction:
 /** Works out the outcome the server stands behind for one step, from the answer and the record. */
 async function decideOutcome(ctx: VisitContext, step: Step, input: StepAnswerInput, transaction: Transaction): Promise<{ outcome: string; confirmedAt: Date | null; detail: Record<string, unknown> }> {
   const inputs = input.inputs ?? {};
-  for (const spec of step.inputs ?? []) {
-    if (spec.required && !inputs[spec.key]) throw invalid(`inputs.${spec.key}`, `${spec.label} is required.`);
+  const declared = step.inputs ?? [];
+  const unknown = Object.keys(inputs).filter((key) => !declared.some((spec) => spec.key === key));
+  if (unknown.length > 0) {
+    const takes = declared.length ? `It takes ${declared.map((spec) => spec.key).join(', ')}.` : 'It takes no inputs.';
+    throw new AppError(400, 'invalid_input', `Step "${step.id}" has no input named ${unknown.map((key) => `"${key}"`).join(', ')}. ${takes}`, Object.fromEntries(unknown.map((key) => [`inputs.${key}`, 'This step has no such input'])));
+  }
+  for (const spec of declared) {
+    const value = inputs[spec.key];
+    if (spec.required && !value) throw invalid(`inputs.${spec.key}`, `${spec.label} is required.`);
+    if (value && spec.type === 'version' && !isFirmwareVersionAnswer(value)) throw invalid(`inputs.${spec.key}`, `${spec.label}: ${FIRMWARE_VERSION_HINT}`);
   }
   if (inputs.sensor_generation) await pinGeneration(ctx, inputs.sensor_generation, transaction);
 
@@ -58,8 +67,10 @@ async function decideOutcome(ctx: VisitContext, step: Step, input: StepAnswerInp
       const mm = inputs.monitor_module_version;
       if (!pc || !mm) throw invalid('inputs', 'Type both firmware versions.');
       const evaluation = evaluateFirmware(pc, mm, ctx.rules);
+      // The visit's "as found" versions stay empty for a display nobody could read; the answer records why.
+      const readable = (v: string) => (v === FIRMWARE_UNREADABLE ? null : v);
       await ctx.visit.update(
-        { controlFirmwareFound: ctx.visit.controlFirmwareFound ?? pc, monitorFirmwareFound: ctx.visit.monitorFirmwareFound ?? mm },
+        { controlFirmwareFound: ctx.visit.controlFirmwareFound ?? readable(pc), monitorFirmwareFound: ctx.visit.monitorFirmwareFound ?? readable(mm) },
         { transaction },
       );
       return { outcome: evaluation.outcome, confirmedAt: null, detail: { reason: evaluation.reason, matchedRules: evaluation.matchedRules.map((r) => r.key) } };
