@@ -111,7 +111,7 @@ export function createApp({ env, sequelize }: AppDeps): CrankwiseApp {
   api.use('/customers', customerRoutes());
   api.use('/sites', siteRoutes());
   api.use('/presses', pressRoutes());
-  api.use('/visits/:visitId/attachments', attachmentRoutes(attachments, env.UPLOAD_MAX_BYTES));
+  api.use('/visits/:visitId/attachments', attachmentRoutes(attachments, { maxUploadBytes: env.UPLOAD_MAX_BYTES, uploadDir: storage.root }));
   api.use('/visits', visitRoutes());
   api.use('/admin', adminRoutes());
   api.use('/invites', inviteRoutes());

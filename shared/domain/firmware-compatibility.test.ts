@@ -25,6 +25,14 @@ describe('evaluateFirmware', () => {
     expect(evaluateFirmware('4.3', '2.10', DEMO_FIRMWARE_RULES).outcome).toBe('compatible');
   });
 
+  it('answers unknown, matching no rule, when a version could not be read (3.4 with 1.7 alone is compatible)', () => {
+    for (const [control, monitor] of [['unreadable', '1.7'], ['3.4', 'unreadable'], ['unreadable', 'unreadable']]) {
+      const result = evaluateFirmware(control!, monitor!, DEMO_FIRMWARE_RULES);
+      expect(result).toMatchObject({ outcome: 'unknown', matchedRules: [] });
+      expect(result.reason).toMatch(/could not be read/);
+    }
+  });
+
   it('answers unknown when no rule covers the pairing', () => {
     expect(evaluateFirmware('2.0', '1.0', DEMO_FIRMWARE_RULES).outcome).toBe('unknown');
   });

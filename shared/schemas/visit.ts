@@ -68,9 +68,9 @@ export const stepAnswerInputSchema = z.object({
   outcome: nameText({ max: 64 }).optional(),
   /** A safety gate needs every confirmation ticked; the server records who and when. */
   confirmed: z.boolean().optional(),
-  // Keys are input keys as procedures declare them (a slug); the service keeps only the step's own.
+  /** Only the keys the step declares are taken (checked against the pinned procedure by the server). */
   inputs: z
-    .record(z.string().regex(/^[a-z0-9][a-z0-9_-]{0,62}$/, 'An input key is a step input such as remark'), text({ max: 200 }))
+    .record(z.string().max(64, 'An input name is at most 64 characters'), text({ max: 200 }))
     .refine((inputs) => Object.keys(inputs).length <= 20, 'A step takes at most 20 inputs')
     .optional(),
   note: text({ max: 2000 }).optional(),
