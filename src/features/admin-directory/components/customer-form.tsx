@@ -4,7 +4,7 @@ import type { z } from 'zod';
 import { customerInputSchema, type Customer, type CustomerInput } from '@shared/schemas/customer';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
-import { useSaveRecord } from '../api/directory-queries';
+import { useSaveRecord } from '@/api/directory';
 import { RecordForm } from './record-form';
 import { applyServerFieldErrors } from './server-field-errors';
 

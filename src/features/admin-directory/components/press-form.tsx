@@ -5,7 +5,7 @@ import type { z } from 'zod';
 import { pressInputSchema, type Press, type PressInput } from '@shared/schemas/press';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
-import { directoryListOptions, useSaveRecord } from '../api/directory-queries';
+import { directoryListOptions, useSaveRecord } from '@/api/directory';
 import { RecordForm } from './record-form';
 import { SelectInput } from './select-input';
 import { applyServerFieldErrors } from './server-field-errors';

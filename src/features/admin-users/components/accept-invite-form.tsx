@@ -7,7 +7,7 @@ import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
 import { errorMessage, isApiError } from '@/lib/api-error';
-import { useAcceptInvite } from '../api/invite-queries';
+import { useAcceptInvite } from '@/api/admin-users';
 
 /** Choose a password (twice); on success the account is open and the person signs in. */
 export function AcceptInviteForm({ token, email, onAccepted }: { token: string; email: string; onAccepted: () => void }) {

@@ -7,7 +7,7 @@ import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
 import { errorMessage, isApiError } from '@/lib/api-error';
-import { useInviteUser } from '../api/user-queries';
+import { useInviteUser } from '@/api/admin-users';
 import { RoleSelect } from './role-select';
 
 type Fields = z.input<typeof userInviteSchema>;

@@ -5,7 +5,7 @@ import type { VisitDetail } from '@shared/schemas/visit-detail';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { isApiError } from '@/lib/api-error';
-import { useCloseVisit } from '../api/use-close-visit';
+import { useCloseVisit } from '@/api/visits';
 import { closeOutErrorMap } from '../utils/close-out-error-map';
 import { closeOutDefaults, type CloseOutFields, type CustomerContact } from '../utils/close-out-values';
 import { CauseSection } from './cause-section';

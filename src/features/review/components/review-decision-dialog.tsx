@@ -8,7 +8,7 @@ import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { errorMessage, isApiError } from '@/lib/api-error';
 import { cn } from '@/lib/cn';
-import { useReviewDecision } from '../api/use-review-decision';
+import { useReviewDecision } from '@/api/visit-review';
 
 export type ReviewMode = 'approve' | 'return';
 

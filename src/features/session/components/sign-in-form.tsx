@@ -8,7 +8,7 @@ import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
 import { errorMessage, isApiError } from '@/lib/api-error';
-import { useSignIn } from '../api/use-sign-in';
+import { useSignIn } from '@/api/session';
 
 type SignInFields = z.input<typeof signInSchema>;
 const FIELD_NAMES = ['email', 'password'] as const;

@@ -10,7 +10,7 @@ import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
 import { errorMessage, isApiError } from '@/lib/api-error';
-import { useCreateVisit } from '../../api/use-create-visit';
+import { useCreateVisit } from '@/api/visits';
 import { suggestProcedure } from '../../lib/suggest-procedure';
 import { PressPicker } from './press-picker';
 

@@ -5,7 +5,7 @@ import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
 import { cn } from '@/lib/cn';
-import type { StepAnswerVars } from '../../api/use-answer-step';
+import type { StepAnswerVars } from '@/api/visits';
 import type { ResilientSave } from '../../hooks/use-resilient-save';
 import { answerInputs, answerReason } from '../../lib/step-records';
 import { SaveStatusBanner } from '../save-status-banner';

@@ -4,7 +4,7 @@ import type { ResolverOutput } from '@shared/domain/resolver-output';
 import type { MeasureStep, ReadingSpec } from '@shared/schemas/procedure';
 import type { StepResultRecord, VisitDetail } from '@shared/schemas/visit-detail';
 import { Button } from '@/components/ui/button';
-import type { StepAnswerVars } from '../../api/use-answer-step';
+import type { StepAnswerVars } from '@/api/visits';
 import type { ResilientSave } from '../../hooks/use-resilient-save';
 import { conditionsKey, draftFromReading, parseConditions, storedConditions } from '../../lib/reading-conditions';
 import { answerReason, currentReadings, outcomeLabel } from '../../lib/step-records';

@@ -3,7 +3,7 @@ import type { Step } from '@shared/schemas/procedure';
 import type { StepResultRecord, VisitDetail } from '@shared/schemas/visit-detail';
 import { Button } from '@/components/ui/button';
 import { cn } from '@/lib/cn';
-import type { StepAnswerVars } from '../../api/use-answer-step';
+import type { StepAnswerVars } from '@/api/visits';
 import type { ResilientSave } from '../../hooks/use-resilient-save';
 import { answerInputs } from '../../lib/step-records';
 import { SaveStatusBanner } from '../save-status-banner';

@@ -8,7 +8,7 @@ import { Button } from '@/components/ui/button';
 import { TextInput } from '@/components/ui/text-input';
 import { VerdictMark } from '@/components/ui/verdict-mark';
 import { isApiError } from '@/lib/api-error';
-import { useSaveReading } from '../../api/use-save-reading';
+import { useSaveReading } from '../../hooks/use-save-reading';
 import { conditionsKey, storedConditions, type ReadingConditions } from '../../lib/reading-conditions';
 import { SaveStatusBanner } from '../save-status-banner';
 import { BandGauge } from './band-gauge';

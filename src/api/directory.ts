@@ -4,8 +4,12 @@ import type { Customer, CustomerInput } from '@shared/schemas/customer';
 import type { Press, PressInput } from '@shared/schemas/press';
 import type { Site, SiteInput } from '@shared/schemas/site';
 import { apiRequest } from '@/lib/api-client';
+import { customerKeys } from './customers';
+import { pressKeys } from './presses';
+import { siteKeys } from './sites';
 
-export type Resource = 'customers' | 'sites' | 'presses';
+/** The three records an admin keeps in the directory, each its own REST resource. */
+export type DirectoryResource = 'customers' | 'sites' | 'presses';
 interface Records {
   customers: Customer;
   sites: Site;
@@ -23,26 +27,23 @@ export interface DirectoryFilters {
   pageSize: number;
 }
 
-// The first key part is the resource itself, so saving here also refreshes the other screens' lists.
-export const directoryKeys = {
-  list: (resource: Resource, filters: DirectoryFilters) => [resource, 'directory', filters] as const,
-};
-
-export const directoryListOptions = <R extends Resource>(resource: R, filters: DirectoryFilters) =>
+const keysOf = { customers: customerKeys, sites: siteKeys, presses: pressKeys } as const;
+/** The same list (key, request and cache entry) the customers, sites and presses screens read. */
+export const directoryListOptions = <R extends DirectoryResource>(resource: R, filters: DirectoryFilters) =>
   queryOptions({
-    queryKey: directoryKeys.list(resource, filters),
+    queryKey: keysOf[resource].list(filters) as readonly [R, 'list', DirectoryFilters],
     queryFn: ({ signal }) => apiRequest<Page<Records[R]>>(`/api/${resource}`, { query: { ...filters }, signal }),
     placeholderData: keepPreviousData,
   });
 
-/** Creates (no id) or updates (id) one record; every list of that resource is refetched. */
-export function useSaveRecord<R extends Resource>(resource: R) {
+/** Creates (no id) or updates (id) one record; every query of that resource is refetched. */
+export function useSaveRecord<R extends DirectoryResource>(resource: R) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ id, values }: { id: number | null; values: Inputs[R] }) =>
       id === null
         ? apiRequest<Records[R]>(`/api/${resource}`, { method: 'POST', body: values })
         : apiRequest<Records[R]>(`/api/${resource}/${id}`, { method: 'PATCH', body: values }),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: [resource] }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: keysOf[resource].all }),
   });
 }
