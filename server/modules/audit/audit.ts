@@ -1,5 +1,5 @@
 import type { Transaction } from 'sequelize';
-import { AuditEvent } from '../visits/visit-work.model';
+import { AuditEvent } from './audit-event.model';
 
 /** Appends one event to the audit trail (who, what, when, and the detail needed to explain it). */
 export async function audit(
