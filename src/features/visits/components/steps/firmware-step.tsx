@@ -9,7 +9,7 @@ import type { StepAnswerVars } from '@/api/visits';
 import type { ResilientSave } from '../../hooks/use-resilient-save';
 import { answerInputs, answerReason } from '../../lib/step-records';
 import { SaveStatusBanner } from '../save-status-banner';
-import { inputErrorsFrom } from './field-errors';
+import { serverFieldErrors } from '@/lib/apply-server-errors';
 
 const CONTROL = 'press_control_version';
 const MONITOR = 'monitor_module_version';
@@ -35,7 +35,7 @@ export function FirmwareStepView({ visit, step, result, answer, editable }: Firm
   const [control, setControl] = useState(given[CONTROL] ?? visit.controlFirmwareFound ?? '');
   const [monitor, setMonitor] = useState(given[MONITOR] ?? visit.monitorFirmwareFound ?? '');
   const [missing, setMissing] = useState<Record<string, string>>({});
-  const errors = { ...inputErrorsFrom(answer.error, answer.isRejected), ...missing };
+  const errors = { ...(answer.isRejected ? serverFieldErrors(answer.error, 'inputs.') : {}), ...missing };
   const label = (key: string, fallback: string) => step.inputs?.find((i) => i.key === key)?.label ?? fallback;
   const verdict = result?.outcome ? VERDICTS[result.outcome] : undefined;
 

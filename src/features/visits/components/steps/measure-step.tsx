@@ -25,7 +25,7 @@ interface MeasureStepViewProps {
 const specMatches = (spec: ReadingSpec) => (r: { quantity: string; circuit: string; position: string }) =>
   r.quantity === spec.quantity && r.circuit === spec.circuit && r.position === spec.position;
 
-/** A stator voltage is judged with its partner, and excitation gives the ratio (DESIGN.md §4.6). */
+/** The two stator voltages are judged together (their vector magnitude does not change with crank angle), and the excitation gives the transformation ratio. */
 function contextFor(spec: ReadingSpec, specs: ReadingSpec[], drafts: Record<string, string>): EntryContext {
   if (spec.quantity !== 'ac_voltage' || spec.circuit === 'rotor') return {};
   const partner = specs.find((s) => s.quantity === 'ac_voltage' && s.position === spec.position && s.circuit === OTHER_STATOR[spec.circuit as 'stator_1' | 'stator_2']);

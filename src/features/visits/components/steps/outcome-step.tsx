@@ -7,7 +7,7 @@ import type { StepAnswerVars } from '@/api/visits';
 import type { ResilientSave } from '../../hooks/use-resilient-save';
 import { answerInputs } from '../../lib/step-records';
 import { SaveStatusBanner } from '../save-status-banner';
-import { inputErrorsFrom } from './field-errors';
+import { serverFieldErrors } from '@/lib/apply-server-errors';
 import { StepInputFields } from './step-input-fields';
 
 type OutcomeStep = Extract<Step, { kind: 'check' | 'choice' | 'inspect' }>;
@@ -31,7 +31,7 @@ export function OutcomeStepView({ visit, step, result, answer, editable, renderP
     return given;
   });
   const [missing, setMissing] = useState<Record<string, string>>({});
-  const errors = { ...inputErrorsFrom(answer.error, answer.isRejected), ...missing };
+  const errors = { ...(answer.isRejected ? serverFieldErrors(answer.error, 'inputs.') : {}), ...missing };
 
   const choose = (outcome: string) => {
     const blank = Object.fromEntries(

@@ -1,22 +1,23 @@
 import { useId } from 'react';
 import type { UseFormRegisterReturn } from 'react-hook-form';
+import { choiceCardVariants } from './control-variants';
 import { FieldError } from './field-error';
 
-interface BigCheckboxProps {
+interface CheckboxCardProps {
   label: string;
   error?: string;
   registration: UseFormRegisterReturn;
 }
 
 /** A confirmation box big enough for a gloved finger: the whole card is the label. */
-export function BigCheckbox({ label, error, registration }: BigCheckboxProps) {
+export function CheckboxCard({ label, error, registration }: CheckboxCardProps) {
   const id = useId();
   const errorId = `${id}-error`;
   return (
     <div className="space-y-1.5">
       <label
         htmlFor={id}
-        className="flex min-h-16 cursor-pointer items-center gap-4 rounded-lg border-2 border-surface-edge bg-surface-raised p-4 text-lg text-ink has-[:checked]:border-accent has-[:checked]:bg-accent-soft has-[:focus-visible]:ring-[3px] has-[:focus-visible]:ring-accent"
+        className={choiceCardVariants({ align: 'center' })}
       >
         <input
           id={id}

@@ -1,6 +1,7 @@
 import { useId, type ReactNode } from 'react';
 import type { UseFormRegisterReturn } from 'react-hook-form';
 import { cn } from '@/lib/cn';
+import { choiceCardVariants } from './control-variants';
 import { FieldError } from './field-error';
 
 export interface RadioCardOption {
@@ -42,7 +43,7 @@ export function RadioCards({ legend, hint, options, error, registration, columns
             <label
               key={option.value}
               htmlFor={optionId}
-              className="flex min-h-16 cursor-pointer items-start gap-4 rounded-lg border-2 border-surface-edge bg-surface-raised p-4 text-lg text-ink has-[:checked]:border-accent has-[:checked]:bg-accent-soft has-[:focus-visible]:ring-[3px] has-[:focus-visible]:ring-accent"
+              className={choiceCardVariants({ align: 'start' })}
             >
               <input
                 id={optionId}
