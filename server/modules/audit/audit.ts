@@ -1,6 +1,6 @@
 import type { Transaction } from 'sequelize';
 import { currentClient } from '../../lib/request-context';
-import { AuditEvent } from '../visits/visit-work.model';
+import { AuditEvent } from './audit-event.model';
 
 /**
  * Appends one event to the audit trail (who, what, when, and the detail needed to explain it). An

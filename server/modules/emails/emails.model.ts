@@ -1,10 +1,10 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import { EMAIL_STATUSES, type EmailStatus } from '../../../shared/schemas/email';
 
 export const LINK_KINDS = ['invite', 'report'] as const;
 export type LinkKind = (typeof LINK_KINDS)[number];
 
-export const EMAIL_STATUSES = ['queued', 'sending', 'sent', 'failed'] as const;
-export type EmailStatus = (typeof EMAIL_STATUSES)[number];
+export { EMAIL_STATUSES, type EmailStatus };
 
 /** One message in the outbox: queued → sending → sent, or back to queued with a later try, or failed. */
 export class Email extends Model<InferAttributes<Email>, InferCreationAttributes<Email>> {

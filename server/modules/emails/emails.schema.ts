@@ -17,19 +17,5 @@ export const emailResendSchema = z.object({
 });
 export type EmailResendInput = z.infer<typeof emailResendSchema>;
 
-export interface EmailDto {
-  id: number;
-  visitId: number | null;
-  kind: string;
-  to: string;
-  subject: string;
-  status: (typeof EMAIL_STATUSES)[number];
-  attempts: number;
-  lastError: string | null;
-  nextAttemptAt: string | null;
-  sentAt: string | null;
-  messageId: string | null;
-  attachments: { filename: string; contentType: string }[];
-  createdAt: string;
-  updatedAt: string;
-}
+// The answer's shape is shared with the client's outbox list.
+export type { EmailDto } from '../../../shared/schemas/email';

@@ -5,7 +5,7 @@ import { createMemoryRouter, RouterProvider } from 'react-router-dom';
 import { describe, expect, it } from 'vitest';
 import { createAppQueryClient } from '@/app/create-app-query-client';
 import { AppProvider } from '@/app/provider';
-import type { ReportView } from '@/features/report/api/report-types';
+import type { ReportView } from '@shared/schemas/report-view';
 import { apiError, mockApi } from '@/testing/mock-api';
 import { ReportPage } from './report-page';
 

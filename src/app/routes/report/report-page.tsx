@@ -3,7 +3,7 @@ import { useParams } from 'react-router-dom';
 import { buttonVariants } from '@/components/ui/button';
 import { LoadError } from '@/components/ui/load-error';
 import { Spinner } from '@/components/ui/spinner';
-import { reportOptions, reportPdfUrl } from '@/features/report/api/report-queries';
+import { reportOptions, reportPdfUrl } from '@/api/report';
 import { AcknowledgePanel } from '@/features/report/components/acknowledge-panel';
 import { ReportDocument } from '@/features/report/components/report-document';
 import { ReportRefusal } from '@/features/report/components/report-refusal';

@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import type { ManagerFigures } from '@shared/schemas/manager-figures';
 
-import { formatHoursMinutes as hm } from '@/lib/format-minutes';
+import { formatHoursMinutes } from '@/lib/format-minutes';
 
 function Card({ title, value, children }: { title: string; value: string; children: ReactNode }) {
   return (
@@ -24,9 +24,9 @@ export function FigureCards({ figures }: { figures: ManagerFigures }) {
         </p>
         {ftf.pending > 0 && <p>{ftf.pending} closed less than {period.windowDays} days ago are not counted yet.</p>}
       </Card>
-      <Card title="Mean time to repair" value={hm(ttr.meanMinutes)}>
+      <Card title="Mean time to repair" value={formatHoursMinutes(ttr.meanMinutes)}>
         <p>
-          h:mm from starting the visit to the customer&rsquo;s sign-off, over {ttr.visits} closed visit{ttr.visits === 1 ? '' : 's'}; median {hm(ttr.medianMinutes)}.
+          h:mm from starting the visit to the customer&rsquo;s sign-off, over {ttr.visits} closed visit{ttr.visits === 1 ? '' : 's'}; median {formatHoursMinutes(ttr.medianMinutes)}.
         </p>
       </Card>
     </div>

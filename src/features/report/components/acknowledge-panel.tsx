@@ -6,8 +6,8 @@ import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
 import { errorMessage } from '@/lib/api-error';
-import { useAcknowledgeReport } from '../api/report-queries';
-import type { ReportView } from '../api/report-types';
+import { useAcknowledgeReport } from '@/api/report';
+import type { ReportView } from '@shared/schemas/report-view';
 import { formatReportDate } from './report-dates';
 
 const acknowledgeFormSchema = z.object({ name: z.string().trim().max(120, 'Keep the name under 120 characters') });

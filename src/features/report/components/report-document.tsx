@@ -1,4 +1,4 @@
-import type { ReportView } from '../api/report-types';
+import type { ReportView } from '@shared/schemas/report-view';
 import { ReportHeader } from './report-header';
 import { ReportPath } from './report-path';
 import { ReportPhotos } from './report-photos';

@@ -1,4 +1,4 @@
-import type { ReportView } from '../api/report-types';
+import type { ReportView } from '@shared/schemas/report-view';
 import { formatReportDate } from './report-dates';
 import { ReportSection } from './report-section';
 

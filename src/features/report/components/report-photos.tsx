@@ -1,5 +1,5 @@
-import { reportThumbUrl } from '../api/report-queries';
-import type { ReportView } from '../api/report-types';
+import { reportThumbUrl } from '@/api/report';
+import type { ReportView } from '@shared/schemas/report-view';
 import { ReportSection } from './report-section';
 
 export function ReportPhotos({ report, token }: { report: ReportView; token: string }) {

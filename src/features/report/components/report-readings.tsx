@@ -1,5 +1,5 @@
 import { VerdictMark } from '@/components/ui/verdict-mark';
-import type { ReportView } from '../api/report-types';
+import type { ReportView } from '@shared/schemas/report-view';
 import { ReportSection } from './report-section';
 import { ScrollRegion } from '@/components/ui/scroll-region';
 

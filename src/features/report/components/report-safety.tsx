@@ -1,5 +1,5 @@
 import { SafetyNotice } from '@/components/ui/safety-notice';
-import type { ReportView } from '../api/report-types';
+import type { ReportView } from '@shared/schemas/report-view';
 import { ReportSection } from './report-section';
 
 export function ReportReturnToService({ report }: { report: ReportView }) {

@@ -1,5 +1,5 @@
-import { reportThumbUrl } from '../api/report-queries';
-import type { ReportView } from '../api/report-types';
+import { reportThumbUrl } from '@/api/report';
+import type { ReportView } from '@shared/schemas/report-view';
 import { formatReportDate } from './report-dates';
 import { Facts, ReportSection } from './report-section';
 

@@ -1,5 +1,5 @@
 import { ScrollRegion } from '@/components/ui/scroll-region';
-import type { ReportView } from '../api/report-types';
+import type { ReportView } from '@shared/schemas/report-view';
 import { formatMinutes } from './report-dates';
 import { Facts, ReportSection } from './report-section';
 

@@ -1,12 +1,12 @@
 import type { VisitDetail } from '@shared/schemas/visit-detail';
 import { formatDateTime, hoursMinutes } from '../lib/format';
-import type { RecordAttachment } from '../api/review-queries';
+import type { AttachmentDto } from '@shared/schemas/attachment';
 import { Fact, RecordSection } from './record-section';
 
 const yes = (v: boolean | undefined) => (v ? 'Confirmed' : 'Not confirmed');
 
 /** What was done, with which parts and how long, the checks before production, and the sign-off. */
-export function RecordCloseOut({ visit, signature }: { visit: VisitDetail; signature: RecordAttachment | undefined }) {
+export function RecordCloseOut({ visit, signature }: { visit: VisitDetail; signature: AttachmentDto | undefined }) {
   const c = visit.closeOut;
   const rts = c.returnToService;
   return (

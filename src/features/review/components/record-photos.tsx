@@ -1,8 +1,8 @@
-import type { RecordAttachment } from '../api/review-queries';
+import type { AttachmentDto } from '@shared/schemas/attachment';
 import { RecordSection } from './record-section';
 
 /** Photo evidence as thumbnails; each opens the full picture in a new tab. */
-export function RecordPhotos({ photos }: { photos: RecordAttachment[] }) {
+export function RecordPhotos({ photos }: { photos: AttachmentDto[] }) {
   return (
     <RecordSection title={`Photos (${photos.length})`}>
       {photos.length === 0 ? (

@@ -4,7 +4,7 @@ import { Link } from 'react-router-dom';
 import type { VisitDetail } from '@shared/schemas/visit-detail';
 import { Banner } from '@/components/ui/banner';
 import { Button, buttonVariants } from '@/components/ui/button';
-import { reviewQueueOptions } from '../api/review-queries';
+import { reviewQueueOptions } from '@/api/visit-table';
 import { ReviewDecisionDialog, type ReviewMode } from './review-decision-dialog';
 
 interface ReviewActionsProps {

@@ -1,7 +1,10 @@
 import { useQuery } from '@tanstack/react-query';
 import { LoadError } from '@/components/ui/load-error';
 import { Spinner } from '@/components/ui/spinner';
-import { visitAttachmentsOptions, visitAuditOptions, visitEmailsOptions, visitRecordOptions } from '../api/review-queries';
+import { attachmentListOptions } from '@/api/attachments';
+import { emailListOptions } from '@/api/emails';
+import { visitAuditOptions } from '@/api/visit-review';
+import { visitDetailOptions } from '@/api/visits';
 import { RecordAudit } from './record-audit';
 import { RecordCloseOut } from './record-close-out';
 import { RecordEmails } from './record-emails';
@@ -19,10 +22,10 @@ interface VisitRecordProps {
 
 /** A visit's full record as the service manager reviews it, with the decision at the top. */
 export function VisitRecord({ visitId, recordHref, queueHref }: VisitRecordProps) {
-  const visit = useQuery(visitRecordOptions(visitId));
-  const attachments = useQuery(visitAttachmentsOptions(visitId));
+  const visit = useQuery(visitDetailOptions(visitId));
+  const attachments = useQuery(attachmentListOptions(visitId));
   const audit = useQuery(visitAuditOptions(visitId));
-  const emails = useQuery(visitEmailsOptions(visitId));
+  const emails = useQuery(emailListOptions({ visitId }));
 
   if (visit.isPending) return <Spinner label="Loading the visit record…" />;
   if (visit.isError) return <LoadError error={visit.error} what="the visit record" onRetry={() => void visit.refetch()} />;
@@ -41,7 +44,7 @@ export function VisitRecord({ visitId, recordHref, queueHref }: VisitRecordProps
       ) : (
         <RecordPhotos photos={photos} />
       )}
-      <RecordEmails visitId={visit.data.id} state={emails.data} loading={emails.isPending} failed={emails.isError} />
+      <RecordEmails emails={emails.data?.items} loading={emails.isPending} failed={emails.isError} />
       {audit.isError ? <LoadError error={audit.error} what="the audit trail" onRetry={() => void audit.refetch()} /> : audit.data && <RecordAudit entries={audit.data.items} />}
     </div>
   );

@@ -6,11 +6,11 @@ import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
 import { cn } from '@/lib/cn';
-import type { StepAnswerVars } from '../../api/use-answer-step';
+import type { StepAnswerVars } from '@/api/visits';
 import type { ResilientSave } from '../../hooks/use-resilient-save';
 import { answerInputs, answerReason } from '../../lib/step-records';
 import { SaveStatusBanner } from '../save-status-banner';
-import { inputErrorsFrom } from './field-errors';
+import { serverFieldErrors } from '@/lib/apply-server-errors';
 
 const CONTROL = 'press_control_version';
 const MONITOR = 'monitor_module_version';
@@ -38,7 +38,7 @@ export function FirmwareStepView({ visit, step, result, answer, editable }: Firm
   const [controlUnreadable, setControlUnreadable] = useState(given[CONTROL] === FIRMWARE_UNREADABLE);
   const [monitorUnreadable, setMonitorUnreadable] = useState(given[MONITOR] === FIRMWARE_UNREADABLE);
   const [missing, setMissing] = useState<Record<string, string>>({});
-  const errors = { ...inputErrorsFrom(answer.error, answer.isRejected), ...missing };
+  const errors = { ...(answer.isRejected ? serverFieldErrors(answer.error, 'inputs.') : {}), ...missing };
   const label = (key: string, fallback: string) => step.inputs?.find((i) => i.key === key)?.label ?? fallback;
   const verdict = result?.outcome ? VERDICTS[result.outcome] : undefined;
 
