@@ -1,4 +1,4 @@
-import type { Model, ModelStatic, Transaction, WhereOptions } from 'sequelize';
+import type { CreationAttributes, Model, ModelStatic, Transaction, WhereOptions } from 'sequelize';
 import type { z } from 'zod';
 import type { VersionInfo } from '../../../shared/schemas/admin-reference';
 import type { SessionUser } from '../../../shared/schemas/session';
@@ -20,7 +20,7 @@ export interface VersionedRow {
 }
 
 /** The columns a resource owns (its content); version, family, publishedAt and createdBy are the builder's. */
-export type Content = Record<string, unknown>;
+export type Content<M extends Model> = Partial<CreationAttributes<M>>;
 
 /** One family's rows, newest version first. */
 export interface FamilyGroup<M> {
@@ -32,16 +32,16 @@ export interface FamilyGroup<M> {
 }
 
 /** A new draft is a copy of the family's newest published version (band sets, firmware rules). */
-export interface CopyDraft<M> {
-  copy: (current: M | undefined, family: string | null) => Content;
+export interface CopyDraft<M extends Model> {
+  copy: (current: M | undefined, family: string | null) => Content<M>;
 }
 
 /** A new draft comes in the request body and replaces the family's draft if there is one (procedure import). */
-export interface BodyDraft<S extends z.ZodType> {
+export interface BodyDraft<M extends Model, S extends z.ZodType> {
   schema: S;
   familyOf: (input: z.infer<S>) => string;
   /** Content to store, or the 422 answer that says why nothing was stored. */
-  accept: (input: z.infer<S>) => { content: Content } | { rejected: unknown };
+  accept: (input: z.infer<S>) => { content: Content<M> } | { rejected: unknown };
   /** Audit verb; "drafted" unless said otherwise. */
   verb?: string;
 }
@@ -62,9 +62,9 @@ export interface VersionedResource<M extends Model & VersionedRow, R, L, S exten
   toRecord: (row: M) => R;
   /** One list entry per family; `exclude` keeps large columns out of the list query. */
   list: { item: (group: FamilyGroup<M>) => L; exclude?: string[] };
-  draft: CopyDraft<M> | BodyDraft<S>;
+  draft: CopyDraft<M> | BodyDraft<M, S>;
   /** PUT /:id edits a draft's content; omit when drafts are replaced by a new POST instead. */
-  save?: { schema: P; content: (input: z.infer<P>) => Content };
+  save?: { schema: P; content: (input: z.infer<P>) => Content<M> };
   /** A last check inside the publish transaction; throw AppError to refuse. */
   beforePublish?: (row: M) => void;
 }
@@ -79,7 +79,7 @@ function assertDraft(row: VersionedRow, what: string): void {
   }
 }
 
-export const isBodyDraft = <M, S extends z.ZodType>(draft: CopyDraft<M> | BodyDraft<S>): draft is BodyDraft<S> => 'schema' in draft;
+export const isBodyDraft = <M extends Model, S extends z.ZodType>(draft: CopyDraft<M> | BodyDraft<M, S>): draft is BodyDraft<M, S> => 'schema' in draft;
 
 /** The service behind a versioned resource: the routes call nothing else. */
 export function versionedService<M extends Model & VersionedRow, R, L, S extends z.ZodType, P extends z.ZodType>(spec: VersionedResource<M, R, L, S, P>) {
@@ -107,7 +107,7 @@ export function versionedService<M extends Model & VersionedRow, R, L, S extends
     return model.findAll({ where: (column ? { [column]: value } : {}) as WhereOptions, order: [['version', 'DESC']], transaction: t });
   }
 
-  async function create(actor: SessionUser, value: string | null, version: number, content: Content, t: Transaction): Promise<M> {
+  async function create(actor: SessionUser, value: string | null, version: number, content: Content<M>, t: Transaction): Promise<M> {
     return model.create({ ...familyDetail(value), ...content, version, publishedAt: null, createdBy: actor.id } as never, { transaction: t });
   }
 
@@ -152,19 +152,24 @@ export function versionedService<M extends Model & VersionedRow, R, L, S extends
       const accepted = draft.accept(input);
       if ('rejected' in accepted) return accepted;
       const value = draft.familyOf(input);
-      return transaction(async (t) => {
-        // Locking the newest row serialises two imports of the same family.
-        const latest = await model.findOne({ where: (column ? { [column]: value } : {}) as WhereOptions, order: [['version', 'DESC']], transaction: t, lock: t.LOCK.UPDATE });
-        const row =
-          latest && latest.publishedAt === null
-            ? await latest.update({ ...accepted.content, createdBy: actor.id } as never, { transaction: t })
-            : await create(actor, value, (latest?.version ?? 0) + 1, accepted.content, t);
-        await event(actor, draft.verb ?? 'drafted', row, {}, t);
-        return { record: spec.toRecord(row) };
-      });
+      // Two first imports of a new family both make version 1; the unique index refuses the second.
+      return withConstraintMessages(
+        () =>
+          transaction(async (t) => {
+            // Locking the newest row serialises two imports into an existing family.
+            const latest = await model.findOne({ where: (column ? { [column]: value } : {}) as WhereOptions, order: [['version', 'DESC']], transaction: t, lock: t.LOCK.UPDATE });
+            const row =
+              latest && latest.publishedAt === null
+                ? await latest.update({ ...accepted.content, createdBy: actor.id } as never, { transaction: t })
+                : await create(actor, value, (latest?.version ?? 0) + 1, accepted.content, t);
+            await event(actor, draft.verb ?? 'drafted', row, {}, t);
+            return { record: spec.toRecord(row) };
+          }),
+        { unique: `${familyName(value)} was changed at the same moment. Reload the page to see it, then try again.` },
+      );
     },
 
-    async save(id: number, content: Content): Promise<R> {
+    async save(id: number, content: Content<M>): Promise<R> {
       return transaction(async (t) => {
         const row = await find(id, t);
         assertDraft(row, what);
