@@ -7,7 +7,7 @@ import tseslint from 'typescript-eslint';
 const restrict = (patterns) => ['error', { patterns }];
 
 export default tseslint.config(
-  { ignores: ['dist/**', 'node_modules/**', '.data/**', 'coverage/**', 'tests/e2e/screenshots/**'] },
+  { ignores: ['dist/**', 'node_modules/**', '.data/**', 'coverage/**', 'tests/e2e/screenshots/**', '.stryker-tmp/**', 'reports/**'] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {

@@ -137,7 +137,6 @@ describe('validateProcedure', () => {
 
 type Measure = Extract<Step, { kind: 'measure' }>;
 const measure = (d: ProcedureDefinition, id: string) => step(d, id) as Measure;
-const finding = (id: string): Step => ({ id, kind: 'finding', title: 'F', instructions: 'x', cause: 'cable', conclusion: 'c', recommendedAction: 'a', escalate: false });
 
 describe('validateProcedure — energy state before measurements (safety rules)', () => {
   it.each(['press_at_rest', 'die_area'] as const)('a %s gate does not count as live-work precautions before a voltage step', (gate) => {
