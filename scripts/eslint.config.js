@@ -58,7 +58,7 @@ const moduleZones = MODULES.map((module) => ({
 const zones = (...sets) => ['error', { zones: sets.flat() }];
 
 export default tseslint.config(
-  { ignores: ['dist/**', 'node_modules/**', '.data/**', 'coverage/**', 'tests/e2e/screenshots/**'] },
+  { ignores: ['dist/**', 'node_modules/**', '.data/**', 'coverage/**', 'tests/e2e/screenshots/**', '.stryker-tmp/**', 'reports/**'] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {
