@@ -9,13 +9,14 @@ const alias = {
 
 const apiPort = process.env.PORT ?? '3000';
 
-export default defineConfig({
+export default defineConfig(({ mode }) => ({
   plugins: [react()],
   resolve: { alias },
   build: {
     outDir: 'dist/client',
     emptyOutDir: true,
-    sourcemap: true,
+    // Source maps would publish the whole client source: only a development-mode build (`vite build --mode development`) makes them.
+    sourcemap: mode !== 'production',
     // The bundler's "callbacks took N s" advice is noise on a busy 2-core machine, not a problem to act on.
     rolldownOptions: { checks: { bundlerTimings: false } },
   },
@@ -65,4 +66,4 @@ export default defineConfig({
       },
     ],
   },
-});
+}));

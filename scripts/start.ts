@@ -58,8 +58,10 @@ const server = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
 
 server.on('exit', (code) => {
   mail.stop();
-  stopCluster();
-  if (!stopping) say(`server stopped (exit ${code ?? 'signal'})`);
+  // Only Ctrl-C stops the database. A server that died on its own may have died because someone is
+  // restarting PostgreSQL right now; a pg_ctl stop in the middle of that leaves the cluster half down.
+  if (stopping) stopCluster();
+  else say(`server stopped (exit ${code ?? 'signal'}); the database keeps running (npm run db:down stops it)`);
   process.exit(code ?? 0);
 });
 

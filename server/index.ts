@@ -8,6 +8,9 @@ import { startOutboxWorker } from './modules/emails/outbox';
 process.on('unhandledRejection', (reason) => {
   logger.error({ err: reason }, 'unhandled promise rejection');
 });
+// A genuine bug leaves the process in an unknown state: log it and stop (the supervisor restarts us).
+// Database outages never arrive here: every pg pool has an 'error' listener (app.ts; Sequelize keeps
+// its own), and requests that meet a lost connection are answered 503 by the error handler.
 process.on('uncaughtException', (err) => {
   logger.fatal({ err }, 'uncaught exception; stopping');
   process.exit(1);

@@ -15,7 +15,10 @@ const envSchema = z.object({
   /** Reverse-proxy hops to trust for client address and https (X-Forwarded-*); 0 when served directly. */
   TRUST_PROXY: z.coerce.number().int().min(0).max(10).default(0),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  /** Failed sign-ins allowed per account per window. */
   SIGNIN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
+  /** Failed sign-ins allowed per client address per window (a whole plant may share one address). */
+  SIGNIN_ADDRESS_LIMIT: z.coerce.number().int().min(1).default(100),
   SIGNIN_RATE_WINDOW_MS: z.coerce.number().int().min(1000).default(15 * 60 * 1000),
   CLIENT_DIST: z.string().optional(),
   /** Folder that holds uploaded photos and signatures (relative to the working directory unless absolute). */

@@ -1,5 +1,6 @@
 import type { Sequelize } from 'sequelize';
 import { initUserInvite } from '../modules/admin/invite.model';
+import { initAuditEvent } from '../modules/audit/audit-event.model';
 import { Attachment, initAttachment } from '../modules/attachments/attachments.model';
 import { Customer, initCustomer } from '../modules/customers/customers.model';
 import { initEmailModels } from '../modules/emails/emails.model';
@@ -23,6 +24,7 @@ export function initModels(sequelize: Sequelize): void {
   initVisit(sequelize);
   initReferenceModels(sequelize);
   initVisitWorkModels(sequelize);
+  initAuditEvent(sequelize);
   initAttachment(sequelize);
   initUserInvite(sequelize);
   initEmailModels(sequelize);

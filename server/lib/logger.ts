@@ -8,3 +8,11 @@ export const logger = pino({
     censor: '[redacted]',
   },
 });
+
+// Paths whose last part is a credential: invitation tokens and signed report links (API and pages).
+const TOKEN_PATHS = /^(\/api\/invites\/|\/api\/report\/|\/accept-invite\/|\/report\/)[^/?#]+/;
+
+/** The URL as it may be logged: a token in an invitation or report path becomes [token]. */
+export function redactUrl(url: string): string {
+  return url.replace(TOKEN_PATHS, '$1[token]');
+}

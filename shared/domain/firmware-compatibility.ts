@@ -1,4 +1,5 @@
 import type { FirmwareRule, VersionRange } from '../schemas/firmware-rule';
+import { FIRMWARE_UNREADABLE } from '../schemas/firmware-version';
 import { parseDottedVersion, versionInRange } from './version-compare';
 
 export type FirmwareOutcome = 'compatible' | 'incompatible' | 'unknown';
@@ -26,6 +27,10 @@ export function evaluateFirmware(
   rules: readonly FirmwareRule[],
 ): FirmwareEvaluation {
   for (const [name, version] of [['press control', pressControl], ['monitor module', monitorModule]] as const) {
+    // No rule can be checked against a version nobody could read; the pairing stays unknown.
+    if (version === FIRMWARE_UNREADABLE) {
+      return { outcome: 'unknown', matchedRules: [], reason: `The ${name} version could not be read, so no compatibility rule can be checked; ask the service manager before going on.` };
+    }
     if (!parseDottedVersion(version)) {
       return { outcome: 'unknown', matchedRules: [], reason: `The ${name} version "${version}" is not a dotted version such as 4.2.` };
     }

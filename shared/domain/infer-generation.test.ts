@@ -62,3 +62,56 @@ describe('inferGeneration', () => {
     expect(result.best?.generationKey).toBe(DEMO_BAND_SETS[0]!.generationKey);
   });
 });
+
+describe('inferGeneration — the numbers behind the suggestion', () => {
+  // z = deviation / near-edge tolerance (20 % in the test bands); distance = √(Σz² / n);
+  // confidence = exp(−Σz²/2) normalised over the candidates. Worked by hand below.
+  it('rotor 89 Ω, older: z = 0; newer (36 Ω): z = (89/36 − 1)/0.2 = 7.361; distances 0 and 7.361', () => {
+    const result = inferGeneration({ rotor: 89 }, TRADE_CANDIDATES);
+    const older = result.ranked.find((r) => r.generationKey === 'older')!;
+    const newer = result.ranked.find((r) => r.generationKey === 'newer')!;
+    expect(older.distance).toBeCloseTo(0, 12);
+    expect(newer.distance).toBeCloseTo((89 / 36 - 1) / 0.2, 9);
+    expect(newer.fitsAllReadings).toBe(false);
+    expect(result.ranked.map((r) => r.label)).toEqual(['Older generation (trade check values)', 'Newer generation (trade check values)']);
+  });
+
+  it('stators 78 Ω: older z = (78/70 − 1)/0.2 = 0.5714, newer z = (78/90 − 1)/0.2 = −0.6667 each; confidence = 1 / (1 + e^(−(Σz²new − Σz²old)/2))', () => {
+    const zOld = (78 / 70 - 1) / 0.2;
+    const zNew = (78 / 90 - 1) / 0.2;
+    const result = inferGeneration({ stator_1: 78, stator_2: 78 }, TRADE_CANDIDATES);
+    const expected = 1 / (1 + Math.exp(-(2 * zNew * zNew - 2 * zOld * zOld) / 2));
+    expect(result.ranked[0]!.generationKey).toBe('older');
+    expect(result.ranked[0]!.confidence).toBeCloseTo(expected, 12);
+    expect(result.ranked[0]!.distance).toBeCloseTo(Math.sqrt((2 * zOld * zOld) / 2), 12);
+    expect(result.ranked[1]!.distance).toBeCloseTo(Math.abs(zNew), 12);
+    expect(result.reason).toBe(`The readings match Older generation (trade check values) (confidence ${(expected * 100).toFixed(0)} %); confirm against the sensor before relying on it.`);
+  });
+
+  it('a reading exactly at the near-edge limit still fits: rotor 106.8 Ω is +20 % of 89 Ω', () => {
+    expect(inferGeneration({ rotor: 89 * 1.2 }, TRADE_CANDIDATES).best?.generationKey).toBe('older');
+  });
+
+  it('ignores zero, negative and NaN readings, using the rest', () => {
+    const result = inferGeneration({ rotor: 0, stator_1: Number.NaN, stator_2: 70 }, TRADE_CANDIDATES);
+    expect(result.ranked[0]!.distance).toBeCloseTo(0, 12);
+    expect(inferGeneration({ rotor: -89 }, TRADE_CANDIDATES).ranked).toEqual([]);
+  });
+
+  it('no candidates: no suggestion, and the reason says why', () => {
+    expect(inferGeneration({ rotor: 89 }, [])).toEqual({ best: null, ranked: [], reason: expect.stringContaining('No usable resistance readings') });
+  });
+
+  it('when no candidate fits, the reason names the nearest', () => {
+    expect(inferGeneration({ rotor: 250 }, TRADE_CANDIDATES).reason).toContain('the nearest is Older generation (trade check values)');
+  });
+
+  it('two identical candidates share the confidence equally', () => {
+    const twin = [
+      { generationKey: 'b', values: { ...TRADE_CANDIDATES[0]!.values, label: 'B' } },
+      { generationKey: 'a', values: { ...TRADE_CANDIDATES[0]!.values, label: 'A' } },
+    ];
+    const result = inferGeneration({ rotor: 89 }, twin);
+    expect(result.ranked.map((r) => r.confidence)).toEqual([0.5, 0.5]);
+  });
+});

@@ -1,4 +1,5 @@
 import fc from 'fast-check';
+import { FC_SEED } from './testing/fast-check-seed';
 import type { WindingBand } from '../schemas/band-set';
 import { judgeResistance, judgeVoltage, VERDICT_SEVERITY } from './judge-band';
 import { NEWER_GENERATION, OLDER_GENERATION } from './testing/trade-fact-band-sets';
@@ -45,7 +46,7 @@ describe('judgeResistance', () => {
           const at = (d: number) => judgeResistance(100 * (1 + (above ? d : -d) / 100), band).verdict;
           expect(VERDICT_SEVERITY[at(large)]).toBeGreaterThanOrEqual(VERDICT_SEVERITY[at(small)]);
         },
-      ),
+      ), { seed: FC_SEED },
     );
   });
 
@@ -81,5 +82,96 @@ describe('judgeVoltage', () => {
 
   it('treats OL on a voltage range as over range, not as an open circuit', () => {
     expect(judgeVoltage('over_range', range)).toMatchObject({ verdict: 'out_of_band', direction: 'high' });
+  });
+});
+
+describe('judgeResistance — thresholds, directions and the figures in the reason', () => {
+  // Band made up for these tests (nominal 100 Ω, ±5 % in band, ±10 % near edge, short ≤ 10 Ω, open ≥ 1 kΩ); percentages worked by hand.
+  it('OL is open, high, with no percentage', () => {
+    expect(judgeResistance('over_range', band)).toEqual({ verdict: 'open', direction: 'high', deviationPercent: null, reason: expect.stringMatching(/OL.*open/) });
+  });
+
+  it('at the open threshold: open, high, naming the reading and the threshold', () => {
+    const result = judgeResistance(1000, band);
+    expect(result).toMatchObject({ verdict: 'open', direction: 'high', deviationPercent: null });
+    expect(result.reason).toBe('1 kΩ is at or above the open threshold of 1 kΩ.');
+    expect(judgeResistance(999, band).verdict).toBe('out_of_band');
+  });
+
+  it('at the short threshold: short, low, naming the reading and the threshold', () => {
+    const result = judgeResistance(10, band);
+    expect(result).toMatchObject({ verdict: 'short', direction: 'low', deviationPercent: null });
+    expect(result.reason).toBe('10 Ω is at or below the short threshold of 10 Ω.');
+    expect(judgeResistance(10.5, band)).toMatchObject({ verdict: 'out_of_band', direction: 'low' });
+  });
+
+  it('in band: no direction, the signed deviation, and the ±5 % named', () => {
+    const result = judgeResistance(103, band);
+    expect(result).toMatchObject({ verdict: 'in_band', direction: null });
+    expect(result.deviationPercent).toBeCloseTo(3, 10);
+    expect(result.reason).toBe('103 Ω is 3.0 % above nominal 100 Ω, within ±5 %.');
+  });
+
+  it('exactly on the near-edge limit (110 Ω, +10 %) is still near the edge, high', () => {
+    const result = judgeResistance(110, band);
+    expect(result).toMatchObject({ verdict: 'near_edge', direction: 'high' });
+    expect(result.reason).toContain('10.0 % above nominal 100 Ω');
+  });
+
+  it('out of band below: low, −20 %, beyond the near-edge ±10 %', () => {
+    const result = judgeResistance(80, band);
+    expect(result).toMatchObject({ verdict: 'out_of_band', direction: 'low' });
+    expect(result.deviationPercent).toBeCloseTo(-20, 10);
+    expect(result.reason).toBe('80 Ω is 20.0 % below nominal 100 Ω, beyond the near-edge ±10 %.');
+  });
+
+  it('out of band above: high, +11 %', () => {
+    const result = judgeResistance(111, band);
+    expect(result).toMatchObject({ verdict: 'out_of_band', direction: 'high' });
+    expect(result.deviationPercent).toBeCloseTo(11, 10);
+    expect(result.reason).toContain('11.0 % above nominal 100 Ω');
+  });
+});
+
+describe('judgeVoltage — deviation from the nearest edge, and the reason', () => {
+  // Common practice, no published source: excitation about 4 to 4.5 V AC (near-edge 5 % is the tests' own choice).
+  const range = OLDER_GENERATION.excitation;
+
+  it('in band: deviation 0, no direction, the range named', () => {
+    expect(judgeVoltage(4.25, range)).toEqual({ verdict: 'in_band', direction: null, deviationPercent: 0, reason: '4.25 V is within 4 V to 4.5 V.' });
+  });
+
+  it('3.9 V is 2.5 % below the 4 V edge: near edge, low', () => {
+    const result = judgeVoltage(3.9, range);
+    expect(result.deviationPercent).toBeCloseTo(-2.5, 10);
+    expect(result.reason).toBe('3.9 V is 2.5 % below the range 4 V to 4.5 V, within the near-edge margin of 5 %.');
+  });
+
+  it('4.7 V is 4.44 % above the 4.5 V edge (0.2 / 4.5): near edge, high', () => {
+    const result = judgeVoltage(4.7, range);
+    expect(result.deviationPercent).toBeCloseTo((0.2 / 4.5) * 100, 10);
+    expect(result.reason).toContain('4.4 % above the range');
+  });
+
+  it('exactly 5 % outside either edge is still near the edge: 3.8 V and 4.725 V', () => {
+    expect(judgeVoltage(3.8, range)).toMatchObject({ verdict: 'near_edge', direction: 'low' });
+    expect(judgeVoltage(4.725, range)).toMatchObject({ verdict: 'near_edge', direction: 'high' });
+  });
+
+  it('3.2 V is 20 % below: out of band, low; 6 V is 33.3 % above: out of band, high', () => {
+    const low = judgeVoltage(3.2, range);
+    expect(low.deviationPercent).toBeCloseTo(-20, 10);
+    expect(low.reason).toBe('3.2 V is 20.0 % below the range 4 V to 4.5 V, beyond the near-edge margin of 5 %.');
+    const high = judgeVoltage(6, range);
+    expect(high.deviationPercent).toBeCloseTo((1.5 / 4.5) * 100, 10);
+    expect(high.reason).toContain('33.3 % above the range');
+  });
+
+  it('OL on a voltage says so, names the expected range and has no percentage (not NaN)', () => {
+    const result = judgeVoltage('over_range', range);
+    expect(result.deviationPercent).toBeNull();
+    expect(result.reason).toContain('OL');
+    expect(result.reason).toContain('AC volts');
+    expect(result.reason).toContain('expected 4 V to 4.5 V');
   });
 });

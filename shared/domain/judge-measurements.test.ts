@@ -47,3 +47,75 @@ describe('judgeMeasurements', () => {
     expect(result.reason).toContain('Stator pair');
   });
 });
+
+describe('judgeMeasurements — outcome rules and the reasons shown', () => {
+  it('a step with no readings has no outcome (it does not pass)', () => {
+    const result = judgeMeasurements([], OLDER_GENERATION);
+    expect(result.outcome).toBeNull();
+    expect(result.reason).toContain('still missing');
+  });
+
+  it('near_edge passes but is named: rotor 100 Ω is 12.4 % above 89 Ω (near edge in the test bands)', () => {
+    expect(judgeMeasurements(windings('100', '70', '70'), OLDER_GENERATION)).toMatchObject({
+      outcome: 'pass',
+      reason: 'All readings pass; rotor near the edge: note for the next visit.',
+    });
+    expect(judgeMeasurements(windings('100', '80', '80'), OLDER_GENERATION).reason).toContain('rotor, stator_1, stator_2 near the edge');
+    expect(judgeMeasurements(windings('89', '70', '70'), OLDER_GENERATION).reason).toBe('All readings are in band.');
+  });
+
+  it('low wins over high when one reading fails each way, and the reason names each failing circuit with its figures', () => {
+    const result = judgeMeasurements(windings('OL', '0.4', '70'), OLDER_GENERATION);
+    expect(result.outcome).toBe('low');
+    expect(result.reason).toMatch(/^rotor: .*OL.* stator_1: 400 mΩ is at or below the short threshold/);
+  });
+
+  it('high names the circuit and how far above: rotor 120 Ω is 34.8 % above 89 Ω', () => {
+    const result = judgeMeasurements(windings('120', '70', '70'), OLDER_GENERATION);
+    expect(result.outcome).toBe('high');
+    expect(result.reason).toBe('rotor: 120 Ω is 34.8 % above nominal 89 Ω, beyond the near-edge ±20 %.');
+  });
+
+  it('imbalance gives the balance reason (66 Ω and 74 Ω: 11.4 % over the 5 % limit)', () => {
+    const result = judgeMeasurements(windings('89', '66', '74'), OLDER_GENERATION);
+    expect(result.reason).toContain('11.4 %');
+    expect(result.balance?.imbalancePercent).toBeCloseTo((8 / 70) * 100, 10);
+  });
+
+  it('computes no balance for stators measured at different ends, or when one is OL', () => {
+    const mixed: ReadingInput[] = [
+      { quantity: 'resistance', circuit: 'stator_1', position: 'control_end', entered: '66' },
+      { quantity: 'resistance', circuit: 'stator_2', position: 'sensor_end', entered: '74' },
+    ];
+    expect(judgeMeasurements(mixed, OLDER_GENERATION)).toMatchObject({ balance: null, outcome: 'pass' });
+    expect(judgeMeasurements(windings('89', 'OL', '70'), OLDER_GENERATION).balance).toBeNull();
+  });
+
+  it('balances the windings at the reference temperature, after the cable', () => {
+    const warm = windings('89', '70', '70').map((r) => ({ ...r, windingTemperatureC: 40 }));
+    expect(judgeMeasurements(warm, OLDER_GENERATION).balance).toMatchObject({ imbalancePercent: 0, balanced: true });
+  });
+
+  it('pairs a stator output only with the other stator at the same position, and only with a voltage', () => {
+    const readings: ReadingInput[] = [
+      { quantity: 'ac_voltage', circuit: 'rotor', position: 'control_end', entered: '4.2' },
+      { quantity: 'ac_voltage', circuit: 'stator_1', position: 'control_end', entered: '1.2' },
+      { quantity: 'ac_voltage', circuit: 'stator_2', position: 'sensor_end', entered: '1.8' },
+      { quantity: 'resistance', circuit: 'stator_2', position: 'control_end', entered: '70' },
+    ];
+    const result = judgeMeasurements(readings, OLDER_GENERATION);
+    expect(result.results[1]!.judgement.status).toBe('awaiting');
+    expect(result.outcome).toBeNull();
+  });
+
+  it('uses the excitation at the same position for the transformation ratio', () => {
+    const readings: ReadingInput[] = [
+      { quantity: 'ac_voltage', circuit: 'rotor', position: 'sensor_end', entered: '4.2' },
+      ...voltages('7.0', '1.750', '3.031'),
+    ];
+    const s1 = judgeMeasurements(readings, OLDER_GENERATION).results[2]!.judgement;
+    if (s1.status !== 'judged' || s1.figures.kind !== 'ac_voltage') throw new Error('judged voltage expected');
+    // Resolver theory (REFERENCES, worked): E = 7.0 V, K = 0.5 → magnitude 3.5 V, ratio 0.500.
+    expect(s1.figures.output!.transformationRatio).toBeCloseTo(0.5, 3);
+  });
+});

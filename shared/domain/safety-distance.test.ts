@@ -86,3 +86,116 @@ describe('hand speed', () => {
     expect(inchesToMillimetres(HAND_SPEED)).toBeCloseTo(1600.2, 6);
   });
 });
+
+describe('oshaTwoHandTripDistance — the shape of Tm = (1/2 + 1/N) × revolution time', () => {
+  // Worked by hand from OSHA 1910.217(c)(3)(viii)(c). At 60 SPM and N = 1 a wrong formula can agree by
+  // chance (1/N = N, 60/SPM = SPM/60), so these use other values.
+  it('30 strokes/min, N = 2: one revolution 2 s, Tm = (0.5 + 0.5) × 2 = 2 s, Ds = 63 × 2 = 126 in (computed)', () => {
+    const result = oshaTwoHandTripDistance(30, 2);
+    expect(result.maximumTime).toBeCloseTo(2, 12);
+    expect(result.distance).toBeCloseTo(126, 10);
+    expect(result.unit).toBe('in');
+  });
+
+  it('120 strokes/min, N = 4: one revolution 0.5 s, Tm = 0.75 × 0.5 = 0.375 s, Ds = 23.625 in (computed)', () => {
+    const result = oshaTwoHandTripDistance(120, 4);
+    expect(result.maximumTime).toBeCloseTo(0.375, 12);
+    expect(result.distance).toBeCloseTo(23.625, 10);
+    // The formula shown in the report carries N and the revolution time.
+    expect(result.formula).toContain('63 in/s');
+    expect(result.formula).toContain('1/2 + 1/4');
+    expect(result.formula).toContain('0.500 s');
+  });
+
+  it('refuses a stroke rate that is not above 0, and N that is not a whole number of 1 or more', () => {
+    for (const spm of [0, -30, Number.NaN]) expect(() => oshaTwoHandTripDistance(spm, 1)).toThrow(/Strokes per minute/);
+    for (const n of [0, -1, 1.5, Number.NaN]) expect(() => oshaTwoHandTripDistance(60, n)).toThrow(/Engaging points/);
+    expect(() => oshaTwoHandTripDistance(0.5, 1)).not.toThrow();
+  });
+});
+
+describe('stopping-time guard of the distance formulas', () => {
+  it('accepts 0 s (a zero time is a time) and refuses negative, NaN and infinite times, naming the time', () => {
+    expect(oshaPresenceSensingDistance(0).distance).toBe(0);
+    expect(oshaPresenceSensingDistance(0).formula).toContain('63 in/s × 0 s');
+    for (const t of [-0.001, Number.NaN, Number.POSITIVE_INFINITY]) {
+      expect(() => oshaPresenceSensingDistance(t)).toThrow(/Stopping time must be a time of 0 s or more/);
+      expect(() => iso13855Distance(t, 14)).toThrow(/Overall stopping time/);
+    }
+    expect(() => ansiB11_19Distance({ stopTime: -0.1, deviceResponseTime: 0.02, objectSensitivity: 1 })).toThrow(/Stop time/);
+    expect(() => ansiB11_19Distance({ stopTime: 0.1, deviceResponseTime: -0.02, objectSensitivity: 1 })).toThrow(/Device response time/);
+  });
+});
+
+describe('depthPenetrationFactor — Dpf = 3.4 × (S − 0.276) in (ANSI B11.19 formula as in REFERENCES)', () => {
+  it('S = 1 in gives 3.4 × 0.724 = 2.4616 in (computed)', () => {
+    expect(depthPenetrationFactor(1)).toBeCloseTo(2.4616, 10);
+  });
+
+  it('S = 0.276 in gives exactly 0, and just below 2.5 in is still covered: 3.4 × 2.214 = 7.5276 in (computed)', () => {
+    expect(depthPenetrationFactor(0.276)).toBeCloseTo(0, 12);
+    expect(depthPenetrationFactor(2.49)).toBeCloseTo(7.5276, 10);
+  });
+
+  it('refuses S of 0 or less, and NaN, pointing at the standard for larger values', () => {
+    for (const s of [0, -0.5, Number.NaN]) expect(() => depthPenetrationFactor(s)).toThrow(RangeError);
+    expect(() => depthPenetrationFactor(3)).toThrow(/below 2\.5 in/);
+  });
+});
+
+describe('ansiB11_19Distance — brake-monitor allowance and the figures shown', () => {
+  it('a brake-monitor setting equal to the stop time is allowed: Tbm = 0, Ds = 63 × 0.22 + 2.4616 = 16.3216 in (computed)', () => {
+    const result = ansiB11_19Distance({ stopTime: 0.2, deviceResponseTime: 0.02, brakeMonitorSetting: 0.2, objectSensitivity: 1 });
+    expect(result.brakeMonitorAllowance).toBe(0);
+    expect(result.distance).toBeCloseTo(16.3216, 10);
+  });
+
+  it('without a brake-monitor setting there is no allowance, and the formula shows the total time and Dpf', () => {
+    const result = ansiB11_19Distance({ stopTime: 0.17, deviceResponseTime: 0.13, objectSensitivity: 1 });
+    expect(result.brakeMonitorAllowance).toBe(0);
+    expect(result.depthPenetration).toBeCloseTo(2.4616, 10);
+    expect(result.unit).toBe('in');
+    expect(result.formula).toContain('63 in/s × 0.300 s');
+    expect(result.formula).toContain('Dpf 2.462 in');
+  });
+
+  it('the refusal of a setting below the stop time says the monitor would stop the press every stroke', () => {
+    expect(() => ansiB11_19Distance({ stopTime: 0.2, deviceResponseTime: 0.02, brakeMonitorSetting: 0.19, objectSensitivity: 1 })).toThrow(
+      /below the measured stop time/,
+    );
+  });
+});
+
+describe('iso13855Distance — range, intrusion term and the 500 mm recomputation', () => {
+  it('T = 0.4 s, d = 30 mm: 800 + 128 = 928 > 500 → 1600 × 0.4 + 128 = 768 mm (computed; the intrusion is added)', () => {
+    const result = iso13855Distance(0.4, 30);
+    expect(result.distance).toBeCloseTo(768, 9);
+    expect(result.formula).toContain('max(500 mm, 1600 mm/s × 0.4 s + 128.0 mm)');
+  });
+
+  it('d = 40 mm is the largest covered: T = 0.1 s → 200 + 8 × 26 = 408 mm (computed)', () => {
+    expect(iso13855Distance(0.1, 40).distance).toBeCloseTo(408, 9);
+  });
+
+  it('refuses d above 40 mm, 0 mm, negative and NaN (this formula covers d ≤ 40 mm only)', () => {
+    for (const d of [40.5, 41, 60, 0, -14, Number.NaN]) expect(() => iso13855Distance(0.1, d)).toThrow(/up to 40 mm/);
+  });
+
+  it('d below 14 mm adds no negative intrusion: T = 0.1 s, d = 10 mm → 200 mm, not 168 mm (from memory of the standard: C is not below 0)', () => {
+    const result = iso13855Distance(0.1, 10);
+    expect(result.distance).toBeCloseTo(200, 9);
+    expect(result.formula).toContain('2000 mm/s × 0.1 s + 0.0 mm');
+  });
+
+  it('exactly 500 mm is not recomputed: T = 0.25 s, d = 14 mm → 2000 × 0.25 = 500 mm with the 2000 mm/s formula (computed)', () => {
+    const result = iso13855Distance(0.25, 14);
+    expect(result.distance).toBe(500);
+    expect(result.formula).toBe('S = 2000 mm/s × 0.25 s + 0.0 mm');
+  });
+
+  it('the 100 mm floor applies to the result shown: T = 0.01 s, d = 14 mm → 20 mm raised to 100 mm', () => {
+    const result = iso13855Distance(0.01, 14);
+    expect(result.distance).toBe(100);
+    expect(result.unit).toBe('mm');
+  });
+});

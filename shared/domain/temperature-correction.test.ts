@@ -1,4 +1,5 @@
 import fc from 'fast-check';
+import { FC_SEED } from './testing/fast-check-seed';
 import { COPPER_INFERRED_ZERO_C, copperTemperatureCoefficient, correctCopperResistance } from './temperature-correction';
 
 describe('correctCopperResistance', () => {
@@ -35,11 +36,20 @@ describe('correctCopperResistance', () => {
           const back = correctCopperResistance(correctCopperResistance(ohms, from, to), to, from);
           expect(back).toBeCloseTo(ohms, 6);
         },
-      ),
+      ), { seed: FC_SEED },
     );
   });
 
   it('refuses temperatures at or below the inferred zero', () => {
     expect(() => correctCopperResistance(10, -234.5, 20)).toThrow(RangeError);
+  });
+});
+
+describe('correctCopperResistance — the range guard names the temperature', () => {
+  it('refuses a target below the inferred zero and non-finite temperatures, naming the value', () => {
+    expect(() => correctCopperResistance(10, 20, -240)).toThrow('A copper temperature of -240 °C is outside the range the correction covers.');
+    expect(() => correctCopperResistance(10, Number.NaN, 20)).toThrow(RangeError);
+    expect(() => correctCopperResistance(10, 20, Number.POSITIVE_INFINITY)).toThrow(RangeError);
+    expect(correctCopperResistance(10, -234, 20)).toBeCloseTo((10 * 254.5) / 0.5, 9);
   });
 });

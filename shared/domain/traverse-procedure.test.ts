@@ -1,4 +1,5 @@
 import { CRANK_ANGLE_PROCEDURE } from '../data/crank-angle-procedure';
+import type { ProcedureDefinition, Step } from '../schemas/procedure';
 import { traverseProcedure } from './traverse-procedure';
 
 const definition = CRANK_ANGLE_PROCEDURE.definition;
@@ -61,5 +62,45 @@ describe('traverseProcedure', () => {
     const t = traverseProcedure(definition, [answer('press-at-rest', 'skipped')]);
     expect(t.current?.id).toBe('press-at-rest');
     expect(t.problems).toEqual(['Step "press-at-rest": "skipped" is not one of its outcomes.']);
+  });
+});
+
+describe('traverseProcedure — broken definitions and what is asked', () => {
+  const tiny = (steps: Step[], start = 'a'): ProcedureDefinition => ({ formatVersion: 1, start, steps });
+  const check = (id: string, yes: string, no: string): Step => ({ id, kind: 'check', title: id, instructions: 'x', outcomes: [{ value: 'yes', label: 'Yes', next: yes }, { value: 'no', label: 'No', next: no }] });
+  const end: Step = { id: 'end', kind: 'finding', title: 'End', instructions: 'x', cause: 'none_found', conclusion: 'c', recommendedAction: 'r', escalate: false };
+
+  it('a missing start step is a problem, with nothing current', () => {
+    const t = traverseProcedure(tiny([end], 'nope'), []);
+    expect(t).toMatchObject({ current: null, required: null, findings: [], problems: ['The start step "nope" does not exist.'] });
+  });
+
+  it('stops on a cycle instead of looping, naming the step reached twice', () => {
+    const t = traverseProcedure(tiny([check('a', 'b', 'end'), check('b', 'a', 'end'), end]), [answer('a', 'yes'), answer('b', 'yes')]);
+    expect(t.problems).toEqual(['Step "a" is reached twice: the procedure has a cycle.']);
+    expect(t.path.map((p) => p.stepId)).toEqual(['a', 'b']);
+  });
+
+  it('an outcome going to an unknown step is a problem, and nothing is current', () => {
+    const t = traverseProcedure(tiny([check('a', 'gone', 'end'), end]), [answer('a', 'yes')]);
+    expect(t).toMatchObject({ current: null, required: null, findings: [] });
+    expect(t.problems).toEqual(['Step "a": outcome "yes" goes to unknown step "gone".']);
+    expect(t.path).toEqual([{ stepId: 'a', kind: 'check', outcome: 'yes' }]);
+  });
+
+  it('asks a check for its outcomes only: no confirmations, readings, inputs or photo', () => {
+    const t = traverseProcedure(tiny([check('a', 'end', 'end'), end]), []);
+    expect(t.required).toEqual({ stepId: 'a', kind: 'check', outcomes: [{ value: 'yes', label: 'Yes' }, { value: 'no', label: 'No' }], confirmations: [], readings: [], inputs: [], photoPrompt: null });
+  });
+
+  it('asks an inspect step for its photo and inputs', () => {
+    const inspect: Step = { id: 'a', kind: 'inspect', title: 'Look', instructions: 'x', photoPrompt: 'Photograph the connector.', inputs: [{ key: 'note', label: 'Note', type: 'text', required: false }], outcomes: [{ value: 'ok', label: 'OK', next: 'end' }] };
+    const t = traverseProcedure(tiny([inspect, end]), []);
+    expect(t.required).toMatchObject({ photoPrompt: 'Photograph the connector.', inputs: [{ key: 'note' }], confirmations: [], readings: [] });
+  });
+
+  it('a finding reached is current and listed, with nothing required', () => {
+    const t = traverseProcedure(tiny([check('a', 'end', 'end'), end]), [answer('a', 'no')]);
+    expect(t).toMatchObject({ current: { id: 'end' }, required: null, findings: [{ id: 'end' }], unusedAnswers: [], problems: [] });
   });
 });

@@ -134,3 +134,181 @@ describe('validateProcedure', () => {
     expect(found).toContain('The start step "missing" does not exist.');
   });
 });
+
+type Measure = Extract<Step, { kind: 'measure' }>;
+const measure = (d: ProcedureDefinition, id: string) => step(d, id) as Measure;
+
+describe('validateProcedure — energy state before measurements (safety rules)', () => {
+  it.each(['press_at_rest', 'die_area'] as const)('a %s gate does not count as live-work precautions before a voltage step', (gate) => {
+    const d = edit((x) => { (step(x, 'live') as Extract<Step, { kind: 'safety_gate' }>).gate = gate; });
+    expect(messages(d)).toEqual(['Step "volts" is an energized measurement not preceded, on every path, by a live-work safety gate']);
+  });
+
+  it.each(['press_at_rest', 'die_area'] as const)('a %s gate does not count as a lockout before a resistance step', (gate) => {
+    const d = edit((x) => { (step(x, 'lock') as Extract<Step, { kind: 'safety_gate' }>).gate = gate; });
+    expect(messages(d)).toEqual(['Step "ohms" is a de-energized measurement not preceded, on every path, by a lockout safety gate']);
+  });
+
+  it('a gate that establishes nothing (press at rest) keeps the lockout in force for the steps after it', () => {
+    const d = edit((x) => {
+      x.steps.push({ id: 'rest', kind: 'safety_gate', gate: 'press_at_rest', title: 'Rest', instructions: 'x', safety: DANGER, confirmations: ['At rest'], outcomes: [{ value: 'confirmed', label: 'OK', next: 'ohms' }] });
+      step(x, 'lock').outcomes[0]!.next = 'rest';
+    });
+    expect(validateProcedure(d)).toMatchObject({ ok: true });
+  });
+
+  it('a check step in between keeps the lockout in force', () => {
+    const d = edit((x) => {
+      x.steps.push({ id: 'look', kind: 'check', title: 'Look', instructions: 'x', outcomes: [{ value: 'yes', label: 'y', next: 'ohms' }, { value: 'no', label: 'n', next: 'ohms' }] });
+      step(x, 'lock').outcomes[0]!.next = 'look';
+    });
+    expect(validateProcedure(d)).toMatchObject({ ok: true });
+  });
+
+  it('an unreachable step with outcomes is reported as unreachable, not crashed on', () => {
+    const d = edit((x) => x.steps.push({ id: 'stray', kind: 'check', title: 'S', instructions: 'x', outcomes: [{ value: 'yes', label: 'y', next: 'none' }, { value: 'no', label: 'n', next: 'none' }] }));
+    expect(messages(d)).toEqual(['Step "stray" cannot be reached from the start step "lock"']);
+  });
+
+  it('a cycle is reported alone: the energy check runs on acyclic procedures only', () => {
+    // With volts (low) → ohms, ohms would also be reached after live work; that is not reported on top of the cycle.
+    const d = edit((x) => { step(x, 'volts').outcomes[1]!.next = 'ohms'; });
+    expect(messages(d)).toEqual(['Step "ohms" is on a cycle: ohms → live → volts → ohms']);
+  });
+});
+
+describe('validateProcedure — rules of a single step', () => {
+  it('a safety gate must carry a safety message (the schema keeps it optional)', () => {
+    const d = edit((x) => { delete step(x, 'lock').safety; });
+    expect(messages(d)).toEqual(['Step "lock" is a safety gate without a safety message']);
+  });
+
+  it('two outcomes with the same value are refused', () => {
+    const d = edit((x) => { step(x, 'ohms').outcomes[1]!.value = 'pass'; });
+    expect(messages(d)).toEqual(['Step "ohms" has two outcomes with the same value']);
+  });
+
+  it('names the outcomes required and the ones present', () => {
+    const d = edit((x) => { step(x, 'volts').outcomes.pop(); });
+    expect(messages(d)).toEqual(['Step "volts" must have exactly the outcomes pass, low, high (has pass, low)']);
+  });
+
+  it('outcomes may come in any order', () => {
+    const d = edit((x) => { step(x, 'ohms').outcomes.reverse(); });
+    expect(validateProcedure(d)).toMatchObject({ ok: true });
+  });
+
+  it('compares outcome values one by one, not as run-together text ("n" and "oyes" are not "no" and "yes")', () => {
+    const d = edit((x) => {
+      x.steps.push({ id: 'look', kind: 'check', title: 'Look', instructions: 'x', outcomes: [{ value: 'n', label: 'n', next: 'ohms' }, { value: 'oyes', label: 'y', next: 'ohms' }] });
+      step(x, 'lock').outcomes[0]!.next = 'look';
+    });
+    expect(messages(d)).toEqual(['Step "look" must have exactly the outcomes yes, no (has n, oyes)']);
+  });
+
+  it('a check needs yes and no, and a firmware step compatible, incompatible and unknown', () => {
+    const d = edit((x) => {
+      x.steps.push({ id: 'look', kind: 'check', title: 'Look', instructions: 'x', outcomes: [{ value: 'yes', label: 'y', next: 'ohms' }] });
+      x.steps.push({ id: 'fw', kind: 'firmware', title: 'FW', instructions: 'x', outcomes: [{ value: 'compatible', label: 'c', next: 'ohms' }, { value: 'unknown', label: 'u', next: 'ohms' }] });
+      step(x, 'lock').outcomes[0]!.next = 'look';
+      step(x, 'look').outcomes[0]!.next = 'fw';
+    });
+    expect(messages(d)).toEqual([
+      'Step "look" must have exactly the outcomes yes, no (has yes)',
+      'Step "fw" must have exactly the outcomes compatible, incompatible, unknown (has compatible, unknown)',
+    ]);
+  });
+
+  it('a firmware step with its three outcomes and a choice with two options are accepted', () => {
+    const d = edit((x) => {
+      x.steps.push({ id: 'fw', kind: 'firmware', title: 'FW', instructions: 'x', outcomes: ['compatible', 'incompatible', 'unknown'].map((value) => ({ value, label: value, next: 'pick' })) });
+      x.steps.push({ id: 'pick', kind: 'choice', title: 'Pick', instructions: 'x', outcomes: [{ value: 'a', label: 'A', next: 'ohms' }, { value: 'b', label: 'B', next: 'ohms' }] });
+      step(x, 'lock').outcomes[0]!.next = 'fw';
+    });
+    expect(validateProcedure(d)).toMatchObject({ ok: true });
+  });
+
+  it('a choice with one option is refused', () => {
+    const d = edit((x) => {
+      x.steps.push({ id: 'pick', kind: 'choice', title: 'Pick', instructions: 'x', outcomes: [{ value: 'a', label: 'A', next: 'ohms' }] });
+      step(x, 'lock').outcomes[0]!.next = 'pick';
+    });
+    expect(messages(d)).toEqual(['Step "pick" is a choice with fewer than two options']);
+  });
+
+  it('a measure step may not mix resistance and AC-voltage readings', () => {
+    const d = edit((x) => { measure(x, 'ohms').readings.push({ key: 'e', label: 'E', quantity: 'ac_voltage', circuit: 'rotor', position: 'control_end', band: { kind: 'excitation' } }); });
+    const found = messages(d);
+    expect(found).toContain('Step "ohms" mixes resistance and AC-voltage readings; split it into a de-energized and an energized step');
+    // And, being energized now, it needs its WARNING/DANGER message and a live-work gate before it.
+    expect(found).toContain('Step "ohms" is an energized measurement without a DANGER or WARNING safety message');
+  });
+
+  it('two readings with the same key are refused', () => {
+    const d = edit((x) => { measure(x, 'ohms').readings.push({ key: 'r', label: 'S1', quantity: 'resistance', circuit: 'stator_1', position: 'control_end', band: { kind: 'winding', circuit: 'stator_1' } }); });
+    expect(messages(d)).toEqual(['Step "ohms" has two readings with the same key']);
+  });
+
+  it('accepts each reading with the band of its quantity and circuit', () => {
+    const d = edit((x) => {
+      measure(x, 'ohms').readings.push({ key: 's1', label: 'S1', quantity: 'resistance', circuit: 'stator_1', position: 'sensor_end', band: { kind: 'winding', circuit: 'stator_1' } });
+      measure(x, 'volts').readings.push({ key: 'v1', label: 'S1', quantity: 'ac_voltage', circuit: 'stator_1', position: 'control_end', band: { kind: 'stator_output' } });
+    });
+    expect(validateProcedure(d)).toMatchObject({ ok: true });
+  });
+
+  it.each([
+    ['a winding of another circuit', 'ohms', { key: 'x', label: 'X', quantity: 'resistance', circuit: 'stator_1', position: 'control_end', band: { kind: 'winding', circuit: 'stator_2' } }],
+    ['a voltage band on a resistance', 'ohms', { key: 'x', label: 'X', quantity: 'resistance', circuit: 'rotor', position: 'control_end', band: { kind: 'excitation' } }],
+    ['the stator band on the rotor (excitation)', 'volts', { key: 'x', label: 'X', quantity: 'ac_voltage', circuit: 'rotor', position: 'control_end', band: { kind: 'stator_output' } }],
+    ['the excitation band on a stator output', 'volts', { key: 'x', label: 'X', quantity: 'ac_voltage', circuit: 'stator_2', position: 'control_end', band: { kind: 'excitation' } }],
+    ['a winding band on a voltage', 'volts', { key: 'x', label: 'X', quantity: 'ac_voltage', circuit: 'stator_1', position: 'control_end', band: { kind: 'winding', circuit: 'stator_1' } }],
+  ] as const)('refuses a reading pointing at %s', (_what, id, reading) => {
+    const d = edit((x) => { measure(x, id).readings.push(structuredClone(reading) as Measure['readings'][number]); });
+    expect(messages(d)).toEqual([`Step "${id}" reading "x" points at a band that does not fit its quantity and circuit`]);
+  });
+
+  it('an energized step may carry DANGER as well as WARNING, but not CAUTION (ANSI Z535.4 signal words)', () => {
+    expect(validateProcedure(edit((x) => { step(x, 'volts').safety = DANGER; }))).toMatchObject({ ok: true });
+    const caution = edit((x) => { step(x, 'volts').safety = { signalWord: 'CAUTION', text: WARN.text }; });
+    expect(messages(caution)).toEqual(['Step "volts" is an energized measurement without a DANGER or WARNING safety message']);
+  });
+
+  it('a de-energized measure step needs no safety message of its own (its lockout gate carries it)', () => {
+    expect(step(small(), 'ohms').safety).toBeUndefined();
+    expect(validateProcedure(small())).toMatchObject({ ok: true });
+  });
+});
+
+describe('validateProcedure — shape errors', () => {
+  it('names a step without an id by its place in the list, and a step that is not an object', () => {
+    const d = edit((x) => { delete (x.steps[2] as { id?: string }).id; }) as unknown as { steps: unknown[] };
+    d.steps.push(null);
+    const found = messages(d);
+    expect(found).toContain('Step "#3" has an invalid id: Invalid input: expected string, received undefined');
+    expect(found.some((m) => m.startsWith('Step "#8" has an invalid shape: '))).toBe(true);
+  });
+
+  it('names the field path inside a step', () => {
+    const d = edit((x) => { measure(x, 'ohms').readings[0]!.key = 'Not A Slug'; });
+    expect(messages(d)).toEqual(['Step "ohms" has an invalid readings.0.key: use lower-case letters, digits, - and _']);
+  });
+
+  it('reports errors outside the steps by their path, and a non-object as the procedure', () => {
+    const d = { ...small(), formatVersion: 2 };
+    const found = messages(d);
+    expect(found).toHaveLength(1);
+    expect(found[0]).toMatch(/^formatVersion: /);
+    expect(messages(null)).toEqual([expect.stringMatching(/^procedure: /)]);
+    expect(messages({ formatVersion: 1, start: 'lock' })).toEqual([expect.stringMatching(/^steps: /)]);
+  });
+
+  it('problems of the whole procedure carry no step id; step problems carry theirs', () => {
+    const result = validateProcedure(edit((x) => { x.start = 'missing'; }));
+    expect(result.ok).toBe(false);
+    if (!result.ok) {
+      expect(result.problems.find((p) => p.message.startsWith('The start step'))?.stepId).toBeNull();
+      expect(result.problems.filter((p) => p.stepId !== null).map((p) => p.stepId)).toContain('lock');
+    }
+  });
+});

@@ -1,5 +1,6 @@
 import { compareVersions } from 'compare-versions';
 import fc from 'fast-check';
+import { FC_SEED } from './testing/fast-check-seed';
 import semver from 'semver';
 import { compareDottedVersions, parseDottedVersion, versionInRange } from './version-compare';
 
@@ -21,7 +22,7 @@ describe('compareDottedVersions', () => {
     fc.assert(
       fc.property(dotted, dotted, (a, b) => {
         expect(compareDottedVersions(a, b)).toBe(compareVersions(a, b));
-      }),
+      }), { seed: FC_SEED },
     );
   });
 
@@ -30,7 +31,7 @@ describe('compareDottedVersions', () => {
       fc.property(dotted, dotted, (a, b) => {
         // semver.valid('3.2') is null, so coerce first (per REFERENCES note).
         expect(compareDottedVersions(a, b)).toBe(semver.compare(semver.coerce(a)!, semver.coerce(b)!));
-      }),
+      }), { seed: FC_SEED },
     );
   });
 
@@ -49,5 +50,33 @@ describe('versionInRange', () => {
     expect(versionInRange('4.3', { from: '4.0', before: '4.3' })).toBe(false);
     expect(versionInRange('3.99', { from: '4.0' })).toBe(false);
     expect(versionInRange('0.1', {})).toBe(true);
+  });
+});
+
+describe('dotted versions — more cases', () => {
+  it('orders by the first differing field either way, and equal versions compare 0', () => {
+    expect(compareDottedVersions('4.2', '4.10')).toBe(-1);
+    expect(compareDottedVersions('4.10', '4.2')).toBe(1);
+    expect(compareDottedVersions('4.2.0.0', '4.2')).toBe(0);
+    expect(compareDottedVersions('4.2.1', '4.2')).toBe(1);
+    expect(compareDottedVersions('4.2', '4.2.1')).toBe(-1);
+  });
+
+  it('names the version that is not dotted, whichever side it is on', () => {
+    expect(() => compareDottedVersions('4.x', '4.1')).toThrow('Not a dotted version: "4.x".');
+    expect(() => compareDottedVersions('4.1', 'beta')).toThrow('Not a dotted version: "beta".');
+  });
+
+  it('trims spaces, accepts V as well as v, and refuses text around the version', () => {
+    expect(parseDottedVersion(' V4.2 ')).toEqual([4, 2]);
+    expect(parseDottedVersion('x4.2')).toBeNull();
+    expect(parseDottedVersion('4.2x')).toBeNull();
+    expect(parseDottedVersion('.4')).toBeNull();
+  });
+
+  it('a range with only before, or only from, works on its own', () => {
+    expect(versionInRange('1.9', { before: '2.0' })).toBe(true);
+    expect(versionInRange('2.0', { before: '2.0' })).toBe(false);
+    expect(versionInRange('4.0', { from: '4.0' })).toBe(true);
   });
 });

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { bandSetValuesSchema, generationKeySchema, type BandSetValues } from './band-set';
 import { firmwareRuleSchema, type FirmwareRule } from './firmware-rule';
+import { nameText } from './text';
 import type { CauseCategory } from './reading';
 import type { ProcedureDefinition, StepKind } from './procedure';
 
@@ -58,7 +59,7 @@ export interface FirmwareRuleSets {
 /** An import: the envelope is checked here, the definition by the procedure validator. */
 export const procedureImportSchema = z.object({
   key: z.string().regex(/^[a-z0-9][a-z0-9-]{0,62}$/, 'use lower-case letters, digits and hyphens, like crank-angle-check'),
-  title: z.string().trim().min(1, 'Give the procedure a title').max(160),
+  title: nameText({ min: 1, minMessage: 'Give the procedure a title', max: 160 }),
   definition: z.unknown(),
 });
 export type ProcedureImportInput = z.infer<typeof procedureImportSchema>;

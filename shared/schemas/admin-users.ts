@@ -1,11 +1,12 @@
 import { z } from 'zod';
 import { roleSchema, type Role } from './roles';
+import { nameText } from './text';
 
 export const PASSWORD_MIN_LENGTH = 12;
 
 export const userInviteSchema = z.object({
   email: z.string().trim().toLowerCase().min(1, 'Enter the person’s e-mail address').email('Enter a valid e-mail address, like name@company.com').max(200),
-  name: z.string().trim().min(1, 'Enter the person’s name as colleagues know it').max(120, 'Name is 120 characters at most'),
+  name: nameText({ min: 1, minMessage: 'Enter the person’s name as colleagues know it', max: 120, maxMessage: 'Name is 120 characters at most' }),
   role: roleSchema,
 });
 export type UserInviteInput = z.infer<typeof userInviteSchema>;

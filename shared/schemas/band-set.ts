@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { nameText, text } from './text';
 
 const positive = z.number().positive().finite();
 const percent = z.number().positive().max(100);
@@ -33,7 +34,7 @@ export type VoltageRange = z.infer<typeof voltageRangeSchema>;
 
 /** The JSON stored in band_sets.values. */
 export const bandSetValuesSchema = z.object({
-  label: z.string().min(1).max(120),
+  label: nameText({ min: 1, max: 120, trim: false }),
   referenceTemperatureC: z.number().min(-40).max(150),
   windings: z.object({
     rotor: windingBandSchema,
@@ -44,7 +45,7 @@ export const bandSetValuesSchema = z.object({
   excitation: voltageRangeSchema,
   statorOutputMagnitude: voltageRangeSchema,
   invented: z.boolean(),
-  note: z.string().max(500),
+  note: text({ max: 500, trim: false }),
 });
 export type BandSetValues = z.infer<typeof bandSetValuesSchema>;
 

@@ -1,12 +1,19 @@
 import { z } from 'zod';
+import { idNumber, wholeNumber } from './numbers';
+import { text } from './text';
 
-export const idParamSchema = z.object({ id: z.coerce.number().int().positive() });
+/** Paging in an address: whole numbers only (no 1e3, no 0x10). */
+export const pageNumber = wholeNumber({ min: 1, max: 100_000, message: 'The page is a whole number from 1 up' });
+export const pageSize = (max: number) =>
+  wholeNumber({ min: 1, max, message: 'The page size is a whole number from 1 up', maxMessage: `At most ${max} rows per page` });
+
+export const idParamSchema = z.object({ id: idNumber() });
 export type IdParam = z.infer<typeof idParamSchema>;
 
 export const pageQuerySchema = z.object({
-  q: z.string().trim().max(100).optional(),
-  page: z.coerce.number().int().min(1).default(1),
-  pageSize: z.coerce.number().int().min(1).max(100).default(25),
+  q: text({ max: 100 }).optional(),
+  page: pageNumber.default(1),
+  pageSize: pageSize(100).default(25),
 });
 export type PageQuery = z.infer<typeof pageQuerySchema>;
 

@@ -1,12 +1,12 @@
 import { z } from 'zod';
 import { pageQuerySchema } from './common';
+import { nameText, text } from './text';
 
-const optionalText = (max: number) =>
-  z.string().trim().max(max).optional().transform((v) => (v === '' ? undefined : v));
+const optionalText = (max: number, kind = text) => kind({ max }).optional().transform((v) => (v === '' ? undefined : v));
 
 export const customerInputSchema = z.object({
-  name: z.string().trim().min(2, 'Enter the customer name (2 characters or more)').max(120),
-  contactName: optionalText(120),
+  name: nameText({ min: 2, minMessage: 'Enter the customer name (2 characters or more)', max: 120 }),
+  contactName: optionalText(120, nameText),
   contactEmail: z
     .string()
     .trim()
@@ -15,7 +15,7 @@ export const customerInputSchema = z.object({
     .max(200)
     .optional()
     .or(z.literal('').transform(() => undefined)),
-  contactPhone: optionalText(40),
+  contactPhone: optionalText(40, nameText),
   notes: optionalText(2000),
 });
 export type CustomerInput = z.infer<typeof customerInputSchema>;

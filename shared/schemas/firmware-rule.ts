@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { nameText, text } from './text';
 
 /** Dotted numeric version such as 4.2 or 2.10.1 (fields compared as numbers). */
 export const dottedVersionSchema = z
@@ -19,11 +20,11 @@ export type FirmwareUnit = z.infer<typeof firmwareUnitSchema>;
 
 /** A row of firmware_rules: which pairing of the two units' versions works. */
 export const firmwareRuleSchema = z.object({
-  key: z.string().min(1).max(80),
+  key: nameText({ min: 1, max: 80, trim: false }),
   pressControl: versionRangeSchema,
   monitorModule: versionRangeSchema,
   compatible: z.boolean(),
-  note: z.string().max(500),
+  note: text({ max: 500, trim: false }),
   invented: z.boolean(),
 });
 export type FirmwareRule = z.infer<typeof firmwareRuleSchema>;

@@ -1,4 +1,6 @@
 import { z } from 'zod';
+import { calendarDateSchema } from './dates';
+import { wholeNumber } from './numbers';
 import type { CauseCategory, Circuit, Position, Quantity, Verdict } from './reading';
 import type { VisitStatus } from './visit';
 import { timeZoneSchema } from './visit-table';
@@ -8,15 +10,14 @@ import { timeZoneSchema } from './visit-table';
 
 export const DEFAULT_REPEAT_WINDOW_DAYS = 30;
 
-const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date such as 2026-03-31');
 
 export const figuresQuerySchema = z
   .object({
     /** Period of closing dates (repeat visits: of the later visit's start), inclusive, office time zone. */
-    from: isoDate.optional(),
-    to: isoDate.optional(),
+    from: calendarDateSchema.optional(),
+    to: calendarDateSchema.optional(),
     /** N of "no further visit on the same press within N days": the repeat window. */
-    windowDays: z.coerce.number().int().min(1, 'The window is at least 1 day').max(365, 'The window is at most 365 days').default(DEFAULT_REPEAT_WINDOW_DAYS),
+    windowDays: wholeNumber({ min: 1, max: 365, message: 'The window is a whole number of days', minMessage: 'The window is at least 1 day', maxMessage: 'The window is at most 365 days' }).default(DEFAULT_REPEAT_WINDOW_DAYS),
     tz: timeZoneSchema.default('UTC'),
   })
   .refine((v) => !v.from || !v.to || v.from <= v.to, { message: 'The "from" date must be on or before the "to" date', path: ['to'] });

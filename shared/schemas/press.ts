@@ -1,5 +1,7 @@
 import { z } from 'zod';
 import { pageQuerySchema } from './common';
+import { idNumber, wholeNumber } from './numbers';
+import { nameText, text } from './text';
 
 const versionText = z
   .string()
@@ -9,31 +11,29 @@ const versionText = z
   .or(z.literal('').transform(() => undefined));
 
 export const pressInputSchema = z.object({
-  siteId: z.coerce.number().int().positive('Pick the site where the press stands'),
-  assetTag: z
-    .string()
-    .trim()
-    .min(1, 'Enter the asset tag painted or labelled on the press')
-    .max(40, 'Asset tag is 40 characters at most'),
-  model: z.string().trim().min(1, 'Enter the press model').max(80),
-  tonnage: z.coerce
-    .number()
-    .int('Tonnage is a whole number of tons')
-    .min(1, 'Tonnage must be at least 1')
-    .max(10_000, 'Tonnage above 10,000 tons is not plausible: check the nameplate'),
-  controlModel: z.string().trim().max(80).optional(),
-  sensorGeneration: z.string().trim().max(40).optional(),
+  siteId: idNumber('Pick the site where the press stands'),
+  assetTag: nameText({ min: 1, minMessage: 'Enter the asset tag painted or labelled on the press', max: 40, maxMessage: 'Asset tag is 40 characters at most' }),
+  model: nameText({ min: 1, minMessage: 'Enter the press model', max: 80 }),
+  tonnage: wholeNumber({
+    min: 1,
+    max: 10_000,
+    message: 'Tonnage is a whole number of tons',
+    minMessage: 'Tonnage must be at least 1',
+    maxMessage: 'Tonnage above 10,000 tons is not plausible: check the nameplate',
+  }),
+  controlModel: nameText({ max: 80 }).optional(),
+  sensorGeneration: nameText({ max: 40 }).optional(),
   controlFirmware: versionText,
   monitorFirmware: versionText,
-  notes: z.string().trim().max(2000).optional(),
+  notes: text({ max: 2000 }).optional(),
 });
 export type PressInput = z.infer<typeof pressInputSchema>;
 export const pressUpdateSchema = pressInputSchema.partial();
 export type PressUpdate = z.infer<typeof pressUpdateSchema>;
 
 export const pressListQuerySchema = pageQuerySchema.extend({
-  siteId: z.coerce.number().int().positive().optional(),
-  customerId: z.coerce.number().int().positive().optional(),
+  siteId: idNumber().optional(),
+  customerId: idNumber().optional(),
 });
 export type PressListQuery = z.infer<typeof pressListQuerySchema>;
 

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { causeCategorySchema, circuitSchema, positionSchema, quantitySchema } from './reading';
+import { nameText, text as freeText } from './text';
 
 export const STEP_KINDS = ['safety_gate', 'check', 'choice', 'measure', 'firmware', 'inspect', 'finding'] as const;
 export type StepKind = (typeof STEP_KINDS)[number];
@@ -23,7 +24,8 @@ export const REQUIRED_OUTCOMES = {
 } as const;
 
 const slug = z.string().regex(/^[a-z0-9][a-z0-9_-]{0,62}$/, 'use lower-case letters, digits, - and _');
-const text = (max: number) => z.string().trim().min(1).max(max);
+const text = (max: number) => freeText({ min: 1, max });
+const title = (max: number) => nameText({ min: 1, max });
 
 export const safetyMessageSchema = z.object({
   signalWord: z.enum(SIGNAL_WORDS),
@@ -41,7 +43,7 @@ export type CauseEvidence = z.infer<typeof causeEvidenceSchema>;
 
 export const outcomeSchema = z.object({
   value: slug,
-  label: text(160),
+  label: title(160),
   next: slug,
   evidence: z.array(causeEvidenceSchema).max(7).optional(),
 });
@@ -49,7 +51,7 @@ export type Outcome = z.infer<typeof outcomeSchema>;
 
 export const stepInputSchema = z.object({
   key: slug,
-  label: text(160),
+  label: title(160),
   type: z.enum(['text', 'sensor_generation', 'version', 'photo']),
   required: z.boolean(),
 });
@@ -65,7 +67,7 @@ export type BandRef = z.infer<typeof bandRefSchema>;
 
 export const readingSpecSchema = z.object({
   key: slug,
-  label: text(160),
+  label: title(160),
   quantity: quantitySchema,
   circuit: circuitSchema,
   position: positionSchema,
@@ -76,7 +78,7 @@ export type ReadingSpec = z.infer<typeof readingSpecSchema>;
 
 const stepBase = {
   id: slug,
-  title: text(160),
+  title: title(160),
   instructions: text(4000),
   safety: safetyMessageSchema.optional(),
   inputs: z.array(stepInputSchema).max(20).optional(),
@@ -95,7 +97,7 @@ export const choiceStepSchema = z.object({ ...stepBase, kind: z.literal('choice'
 export const measureStepSchema = z.object({
   ...stepBase,
   kind: z.literal('measure'),
-  meterSetting: text(200),
+  meterSetting: title(200),
   readings: z.array(readingSpecSchema).min(1).max(12),
   // When the visit has no sensor generation yet, suggest one from these readings.
   suggestsGeneration: z.boolean().optional(),
@@ -144,7 +146,7 @@ export type ProcedureDefinition = z.infer<typeof procedureDefinitionSchema>;
 export const procedureSchema = z.object({
   key: slug,
   version: z.number().int().positive(),
-  title: text(160),
+  title: title(160),
   definition: procedureDefinitionSchema,
 });
 export type Procedure = z.infer<typeof procedureSchema>;

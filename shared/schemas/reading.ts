@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { nameText } from './text';
 
 // The words of DESIGN.md §3: one definition shared by client, server and engine.
 export const QUANTITIES = ['resistance', 'ac_voltage'] as const;
@@ -50,7 +51,7 @@ export const readingInputSchema = z.object({
   quantity: quantitySchema,
   circuit: circuitSchema,
   position: positionSchema,
-  entered: z.string().max(40),
+  entered: nameText({ max: 40, trim: false }),
   windingTemperatureC: z.number().min(-40).max(150).optional(),
   cable: cableSchema.optional(),
 });

@@ -1,5 +1,8 @@
 import { z } from 'zod';
-import type { Page } from './common';
+import { pageNumber, pageSize, type Page } from './common';
+import { calendarDateSchema } from './dates';
+import { idNumber } from './numbers';
+import { text } from './text';
 import { causeCategorySchema, type CauseCategory } from './reading';
 import { visitStatusSchema, type VisitStatus } from './visit';
 
@@ -11,15 +14,14 @@ export const VISIT_TABLE_SORTS = ['reference', 'startedAt', 'closedAt', 'status'
 export type VisitTableSort = (typeof VISIT_TABLE_SORTS)[number];
 export const VISIT_TABLE_MAX_PAGE_SIZE = 100;
 
-const isoDate = z
-  .string()
-  .regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date such as 2026-03-31')
-  .refine((s) => !Number.isNaN(Date.parse(`${s}T00:00:00Z`)), 'That date does not exist');
-
-/** An IANA time zone such as Europe/Berlin: day and month boundaries are the office's, not the server's. */
+/**
+ * An IANA time zone such as Europe/Berlin: day and month boundaries are the office's, not the server's.
+ * The browser's list and the database's list differ a little; the server also checks the database's.
+ */
 export const timeZoneSchema = z
   .string()
   .max(64)
+  .regex(/^[A-Za-z0-9_+\-/]+$/, 'Use a time zone name such as Europe/Berlin')
   .refine((tz) => {
     try {
       new Intl.DateTimeFormat('en', { timeZone: tz });
@@ -29,7 +31,7 @@ export const timeZoneSchema = z
     }
   }, 'Unknown time zone');
 
-const id = z.coerce.number().int().positive();
+const id = idNumber();
 /** `status=closed,returned` in the address: one parameter, comma-separated. */
 const statusList = z
   .string()
@@ -44,9 +46,9 @@ const filterShape = {
   technicianId: id.optional(),
   cause: causeCategorySchema.optional(),
   /** Visit start date range, inclusive, in the office's time zone. */
-  from: isoDate.optional(),
-  to: isoDate.optional(),
-  q: z.string().trim().max(100).optional(),
+  from: calendarDateSchema.optional(),
+  to: calendarDateSchema.optional(),
+  q: text({ max: 100 }).optional(),
   tz: timeZoneSchema.default('UTC'),
 };
 
@@ -61,8 +63,8 @@ export const visitTableQuerySchema = z
     ...filterShape,
     sort: z.enum(VISIT_TABLE_SORTS, 'Sort by one of the table columns').default('startedAt'),
     dir: z.enum(['asc', 'desc']).default('desc'),
-    page: z.coerce.number().int().min(1).default(1),
-    pageSize: z.coerce.number().int().min(1).max(VISIT_TABLE_MAX_PAGE_SIZE, `At most ${VISIT_TABLE_MAX_PAGE_SIZE} rows per page`).default(25),
+    page: pageNumber.default(1),
+    pageSize: pageSize(VISIT_TABLE_MAX_PAGE_SIZE).default(25),
   })
   .refine(datesInOrder, datesMessage);
 export type VisitTableQuery = z.infer<typeof visitTableQuerySchema>;

@@ -1,4 +1,7 @@
 import { z } from 'zod';
+import { pageNumber, pageSize } from './common';
+import { decimalNumber, idNumber, wholeNumber } from './numbers';
+import { nameText, text } from './text';
 
 export const VISIT_STATUSES = ['draft', 'in_progress', 'closed', 'approved', 'returned'] as const;
 export const visitStatusSchema = z.enum(VISIT_STATUSES);
@@ -26,12 +29,8 @@ const versionText = z
   .or(z.literal('').transform(() => undefined));
 
 export const visitCreateSchema = z.object({
-  pressId: z.coerce.number().int().positive('Pick the press you are working on'),
-  faultDisplayed: z
-    .string()
-    .trim()
-    .min(2, 'Type the fault exactly as the control displays it')
-    .max(500, 'Keep the fault text under 500 characters'),
+  pressId: idNumber('Pick the press you are working on'),
+  faultDisplayed: text({ min: 2, minMessage: 'Type the fault exactly as the control displays it', max: 500, maxMessage: 'Keep the fault text under 500 characters' }),
   controlFirmwareFound: versionText,
   monitorFirmwareFound: versionText,
   procedureKey: z.string().regex(/^[a-z0-9][a-z0-9-]*$/).default('crank-angle-sensor-circuit'),
@@ -44,24 +43,28 @@ export const visitListQuerySchema = z.object({
     .enum(['true', 'false'])
     .optional()
     .transform((v) => v === 'true'),
-  page: z.coerce.number().int().min(1).default(1),
-  pageSize: z.coerce.number().int().min(1).max(100).default(25),
+  page: pageNumber.default(1),
+  pageSize: pageSize(100).default(25),
 });
 export type VisitListQuery = z.infer<typeof visitListQuerySchema>;
 
 export const visitStepParamsSchema = z.object({
-  id: z.coerce.number().int().positive(),
+  id: idNumber(),
   stepId: z.string().regex(/^[a-z0-9][a-z0-9_-]{0,62}$/, 'Unknown step'),
 });
 
 /** The technician's answer to one step. Measure and firmware outcomes are worked out by the server. */
 export const stepAnswerInputSchema = z.object({
   id: uuid,
-  outcome: z.string().max(64).optional(),
+  outcome: nameText({ max: 64 }).optional(),
   /** A safety gate needs every confirmation ticked; the server records who and when. */
   confirmed: z.boolean().optional(),
-  inputs: z.record(z.string(), z.string().trim().max(200)).optional(),
-  note: z.string().trim().max(2000).optional(),
+  /** Only the keys the step declares are taken (checked against the pinned procedure by the server). */
+  inputs: z
+    .record(z.string().max(64, 'An input name is at most 64 characters'), text({ max: 200 }))
+    .refine((inputs) => Object.keys(inputs).length <= 20, 'A step takes at most 20 inputs')
+    .optional(),
+  note: text({ max: 2000 }).optional(),
 });
 export type StepAnswerInput = z.infer<typeof stepAnswerInputSchema>;
 
@@ -71,7 +74,7 @@ export const readingSaveSchema = z.object({
   quantity: z.enum(['resistance', 'ac_voltage']),
   circuit: z.enum(['rotor', 'stator_1', 'stator_2']),
   position: z.enum(['control_end', 'sensor_end']),
-  entered: z.string().trim().min(1, 'Type the meter reading, or OL for an open circuit').max(40),
+  entered: nameText({ min: 1, minMessage: 'Type the meter reading, or OL for an open circuit', max: 40 }),
   windingTemperatureC: z.number().min(-40).max(150).optional(),
   cable: z
     .object({
@@ -87,11 +90,11 @@ export type ReadingSaveInput = z.infer<typeof readingSaveSchema>;
 
 export const partUsedSchema = z.object({
   id: uuid,
-  partNumber: z.string().trim().min(1, 'Enter the part number from the label').max(60),
-  description: z.string().trim().max(200).default(''),
-  quantity: z.coerce.number().int('Quantity is a whole number').min(1, 'Quantity is at least 1').max(1000),
-  serialRemoved: z.string().trim().max(60).optional(),
-  serialFitted: z.string().trim().max(60).optional(),
+  partNumber: nameText({ min: 1, minMessage: 'Enter the part number from the label', max: 60 }),
+  description: text({ max: 200 }).default(''),
+  quantity: wholeNumber({ min: 1, max: 1000, message: 'Enter the quantity as a whole number, e.g. 1', minMessage: 'Quantity is at least 1' }),
+  serialRemoved: nameText({ max: 60 }).optional(),
+  serialFitted: nameText({ max: 60 }).optional(),
 });
 export type PartUsedInput = z.infer<typeof partUsedSchema>;
 
@@ -100,7 +103,7 @@ export const returnToServiceSchema = z.object({
   faultCleared: z.literal(true, 'Confirm the fault has cleared on the control'),
   tdcAgrees: z.literal(true, 'Confirm the crank-angle display reads top dead centre with the slide at top'),
   stoppingTimeChecked: z.literal(true, 'Confirm the stopping-time / brake-monitor check passed'),
-  stoppingTimeMs: z.coerce.number().positive().max(5000).optional(),
+  stoppingTimeMs: decimalNumber({ min: 0.001, max: 5000, message: 'Enter the stopping time in milliseconds, e.g. 180, or leave it empty', minMessage: 'The stopping time is above 0 ms' }).optional(),
   presenceSensingDistanceOk: z.enum(['yes', 'not_fitted'], 'Say whether the presence-sensing device still sits at a safe distance'),
 });
 export type ReturnToService = z.infer<typeof returnToServiceSchema>;
@@ -117,15 +120,15 @@ export const CAUSE_LABELS = {
 
 export const closeOutSchema = z.object({
   causeCategory: z.enum(['configuration', 'wiring', 'firmware', 'sensor', 'cable', 'board', 'none_found'], 'Choose the root cause'),
-  actionsTaken: z.string().trim().min(3, 'Describe what you did').max(4000),
-  recommendations: z.string().trim().max(4000).optional(),
+  actionsTaken: text({ min: 3, minMessage: 'Describe what you did', max: 4000 }),
+  recommendations: text({ max: 4000 }).optional(),
   parts: z.array(partUsedSchema).max(50).default([]),
-  labourMinutes: z.coerce.number().int('Whole minutes').min(0).max(10_000),
-  travelMinutes: z.coerce.number().int('Whole minutes').min(0).max(10_000),
+  labourMinutes: wholeNumber({ min: 0, max: 10_000, message: 'Enter the labour time in whole minutes, e.g. 90' }),
+  travelMinutes: wholeNumber({ min: 0, max: 10_000, message: 'Enter the travel time in whole minutes, e.g. 45 (0 if none)' }),
   controlFirmwareLeft: versionText,
   monitorFirmwareLeft: versionText,
   returnToService: returnToServiceSchema,
-  contactName: z.string().trim().min(2, "Enter the name of the customer's contact who signs").max(120),
+  contactName: nameText({ min: 2, minMessage: "Enter the name of the customer's contact who signs", max: 120 }),
   contactEmail: z.email('Enter the e-mail address the report goes to').max(200),
   /** The signature drawn on the tablet, as a PNG data URL. */
   signaturePng: z
@@ -137,6 +140,6 @@ export type CloseOutInput = z.infer<typeof closeOutSchema>;
 
 export const reviewDecisionSchema = z.object({
   decision: z.enum(['approve', 'return'], 'Approve the visit or return it'),
-  comment: z.string().trim().min(3, 'Say what the technician should correct').max(2000).optional(),
+  comment: text({ min: 3, minMessage: 'Say what the technician should correct', max: 2000 }).optional(),
 });
 export type ReviewDecision = z.infer<typeof reviewDecisionSchema>;

@@ -17,7 +17,7 @@ export interface NavItem {
 }
 
 // Only screens that exist are listed; each role sees the ones its account may use.
-// Managers and admins may work a visit themselves (DESIGN.md §2), so they see their own visits too.
+// Managers and admins may work a visit themselves, so they see their own visits too.
 export const NAV_ITEMS: readonly NavItem[] = [
   { to: '/review', label: 'Review queue', roles: OFFICE_ROLES },
   { to: '/visits/all', label: 'All visits', roles: OFFICE_ROLES },

@@ -1,6 +1,6 @@
-import supertest from 'supertest';
+import type supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { signedInAgent, useApiApp } from '../api-app';
+import { anonymous, signedInAgent, useApiApp } from '../api-app';
 import { TEST_PASSWORD, makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
 
@@ -33,7 +33,7 @@ describe('deactivating a user', () => {
     expect(await sessionRowsOf(tech.id)).toBe(0);
     expect((await tablet.get('/api/presses')).status).toBe(401);
     expect((await phone.get('/api/session')).status).toBe(401);
-    const again = await supertest(app()).post('/api/session').send({ email: tech.email, password: TEST_PASSWORD });
+    const again = await anonymous(app()).post('/api/session').send({ email: tech.email, password: TEST_PASSWORD });
     expect(again.status).toBe(401);
   });
 

@@ -3,7 +3,7 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import sharp from 'sharp';
-import supertest from 'supertest';
+import type supertest from 'supertest';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import type { SessionUser } from '../../shared/schemas/session';
 import { Attachment } from '../../server/modules/attachments/attachments.model';
@@ -12,7 +12,7 @@ import { DiskStorage, type FileStorage } from '../../server/modules/attachments/
 import { TEST_CAMERA_MAKE, cameraJpeg, gif, heicContainer, noisyJpeg, plainJpeg, pngWithAlpha, svg, truncatedJpeg, webp } from '../../server/modules/attachments/test-images';
 import { Visit } from '../../server/modules/visits/visits.model';
 import type { User } from '../../server/modules/users/users.model';
-import { signedInAgent, useApiApp } from '../api-app';
+import { anonymous, signedInAgent, useApiApp } from '../api-app';
 import { makePress, makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
 
@@ -302,7 +302,7 @@ describe('refused uploads leave nothing behind', () => {
   });
 
   it('answers 401 for an upload without a session', async () => {
-    const res = await expectNothingLeft(async () => supertest(app()).post(attachmentsOf(openVisit.id)).attach('photos', await plainJpeg(), 'x.jpg'));
+    const res = await expectNothingLeft(async () => anonymous(app()).post(attachmentsOf(openVisit.id)).attach('photos', await plainJpeg(), 'x.jpg'));
     expect(res.status).toBe(401);
   });
 

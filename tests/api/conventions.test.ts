@@ -2,7 +2,7 @@ import express from 'express';
 import supertest from 'supertest';
 import { describe, expect, it } from 'vitest';
 import { errorHandler } from '../../server/lib/errors';
-import { useApiApp } from '../api-app';
+import { anonymous, useApiApp } from '../api-app';
 import { useTestDatabase } from '../setup/database';
 
 const db = useTestDatabase();
@@ -25,7 +25,7 @@ describe('API conventions', () => {
   });
 
   it('answers a body that is not JSON with 400', async () => {
-    const res = await supertest(app()).post('/api/session').set('Content-Type', 'application/json').send('{oops');
+    const res = await anonymous(app()).post('/api/session').set('Content-Type', 'application/json').send('{oops');
     expect(res.status).toBe(400);
     expect(res.body.error.message).toMatch(/could not be read as JSON/);
   });

@@ -1,7 +1,8 @@
 import supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { INVITE_LIFETIME_MS, hashInviteToken } from '../../server/modules/admin/invite-token';
-import { signedInAgent, useApiApp } from '../api-app';
+import { renderLinks } from '../../server/modules/emails/email-links';
+import { anonymous, signedInAgent, useApiApp } from '../api-app';
 import { makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
 
@@ -19,15 +20,18 @@ beforeAll(async () => {
 
 const query = async <T>(sql: string, replacements: Record<string, unknown>) => (await db.sequelize.query(sql, { replacements }))[0] as T[];
 
-/** The invitation link as it went into the outbox: the only place the raw token exists. */
-async function linkMailedTo(email: string): Promise<{ url: URL; token: string; row: { subject: string; text: string; html: string; kind: string; created_by: number } }> {
-  const rows = await query<{ subject: string; text: string; html: string; kind: string; created_by: number }>(
-    `SELECT subject, text, html, kind, created_by FROM emails WHERE to_address = :email ORDER BY id DESC LIMIT 1`,
+type StoredEmail = { subject: string; text: string; html: string; kind: string; created_by: number; link_kind: 'invite' | null; link_ref: number | null };
+
+/** The invitation link as the outbox renders it when sending: the stored row holds only a marker. */
+async function linkMailedTo(email: string): Promise<{ url: URL; token: string; row: StoredEmail; sent: { text: string; html: string } }> {
+  const rows = await query<StoredEmail>(
+    `SELECT subject, text, html, kind, created_by, link_kind, link_ref FROM emails WHERE to_address = :email ORDER BY id DESC LIMIT 1`,
     { email },
   );
   const row = rows[0]!;
-  const url = new URL(/https:\/\/\S+/.exec(row.text)![0]);
-  return { url, token: url.pathname.split('/').pop()!, row };
+  const sent = await renderLinks({ linkKind: row.link_kind, linkRef: row.link_ref, html: row.html, text: row.text });
+  const url = new URL(/https:\/\/\S+/.exec(sent.text)![0]);
+  return { url, token: url.pathname.split('/').pop()!, row, sent };
 }
 
 async function invite(email: string, role = 'technician') {
@@ -41,11 +45,15 @@ describe('inviting a person by e-mail', () => {
     const user = await invite('ina@test.example');
     expect(user.status).toBe('invited');
 
-    const { url, token, row } = await linkMailedTo('ina@test.example');
-    expect(row).toMatchObject({ kind: 'user_invite', subject: 'Your Crankwise invitation', created_by: adminId });
+    const { url, token, row, sent } = await linkMailedTo('ina@test.example');
+    expect(row).toMatchObject({ kind: 'user_invite', subject: 'Your Crankwise invitation', created_by: adminId, link_kind: 'invite' });
     expect(url.origin).toBe('https://service.test.example');
     expect(url.pathname).toBe(`/accept-invite/${token}`);
-    expect(row.html).toContain(url.toString());
+    expect(sent.html).toContain(url.toString());
+    // The stored e-mail holds no usable link: only the marker the outbox fills in when it sends.
+    expect(row.text).not.toContain(token);
+    expect(row.html).not.toContain(token);
+    expect(row.text).toContain('{{link}}');
 
     const stored = await query<{ token_hash: string; expires_at: Date }>(`SELECT token_hash, expires_at FROM user_invites WHERE user_id = :id`, { id: user.id });
     expect(stored).toHaveLength(1);
@@ -57,7 +65,7 @@ describe('inviting a person by e-mail', () => {
     expect(lifetime).toBeGreaterThan(INVITE_LIFETIME_MS - 60_000);
     expect(lifetime).toBeLessThanOrEqual(INVITE_LIFETIME_MS);
 
-    const signIn = await supertest(app()).post('/api/session').send({ email: 'ina@test.example', password: NEW_PASSWORD });
+    const signIn = await anonymous(app()).post('/api/session').send({ email: 'ina@test.example', password: NEW_PASSWORD });
     expect(signIn.status).toBe(401);
   });
 
@@ -69,25 +77,25 @@ describe('inviting a person by e-mail', () => {
     expect(preview.status).toBe(200);
     expect(preview.body).toMatchObject({ email: 'once@test.example', name: 'Ina Invited' });
 
-    const accepted = await supertest(app()).post(`/api/invites/${token}/accept`).send({ password: NEW_PASSWORD });
+    const accepted = await anonymous(app()).post(`/api/invites/${token}/accept`).send({ password: NEW_PASSWORD });
     expect(accepted.status).toBe(200);
     expect(accepted.body).toEqual({ email: 'once@test.example' });
 
-    const signIn = await supertest(app()).post('/api/session').send({ email: 'once@test.example', password: NEW_PASSWORD });
+    const signIn = await anonymous(app()).post('/api/session').send({ email: 'once@test.example', password: NEW_PASSWORD });
     expect(signIn.status).toBe(200);
     expect(signIn.body.user.role).toBe('manager');
 
-    const again = await supertest(app()).post(`/api/invites/${token}/accept`).send({ password: 'someone else tries this' });
+    const again = await anonymous(app()).post(`/api/invites/${token}/accept`).send({ password: 'someone else tries this' });
     expect(again.status).toBe(410);
     expect(again.body.error.message).toMatch(/already been used/);
-    const stillOld = await supertest(app()).post('/api/session').send({ email: 'once@test.example', password: NEW_PASSWORD });
+    const stillOld = await anonymous(app()).post('/api/session').send({ email: 'once@test.example', password: NEW_PASSWORD });
     expect(stillOld.status).toBe(200);
   });
 
   it('refuses a password shorter than 12 characters, naming the field', async () => {
     await invite('short@test.example');
     const { token } = await linkMailedTo('short@test.example');
-    const res = await supertest(app()).post(`/api/invites/${token}/accept`).send({ password: 'eleven-char' });
+    const res = await anonymous(app()).post(`/api/invites/${token}/accept`).send({ password: 'eleven-char' });
     expect(res.status).toBe(400);
     expect(res.body.error.fields.password).toMatch(/at least 12 characters/);
     expect((await supertest(app()).get(`/api/invites/${token}`)).status).toBe(200);
@@ -97,7 +105,7 @@ describe('inviting a person by e-mail', () => {
     const user = await invite('late@test.example');
     const { token } = await linkMailedTo('late@test.example');
     await db.sequelize.query(`UPDATE user_invites SET expires_at = now() - interval '1 minute' WHERE user_id = :id`, { replacements: { id: user.id } });
-    const res = await supertest(app()).post(`/api/invites/${token}/accept`).send({ password: NEW_PASSWORD });
+    const res = await anonymous(app()).post(`/api/invites/${token}/accept`).send({ password: NEW_PASSWORD });
     expect(res.status).toBe(410);
     expect(res.body.error.message).toMatch(/expired/);
     const list = await admin.get('/api/admin/users');
@@ -111,8 +119,8 @@ describe('inviting a person by e-mail', () => {
     expect(res.status).toBe(200);
     const second = (await linkMailedTo('resend@test.example')).token;
     expect(second).not.toBe(first);
-    expect((await supertest(app()).post(`/api/invites/${first}/accept`).send({ password: NEW_PASSWORD })).status).toBe(410);
-    expect((await supertest(app()).post(`/api/invites/${second}/accept`).send({ password: NEW_PASSWORD })).status).toBe(200);
+    expect((await anonymous(app()).post(`/api/invites/${first}/accept`).send({ password: NEW_PASSWORD })).status).toBe(410);
+    expect((await anonymous(app()).post(`/api/invites/${second}/accept`).send({ password: NEW_PASSWORD })).status).toBe(200);
     expect((await admin.post(`/api/admin/users/${user.id}/invite`)).status).toBe(409);
   });
 
@@ -120,7 +128,7 @@ describe('inviting a person by e-mail', () => {
     const user = await invite('withdrawn@test.example');
     const { token } = await linkMailedTo('withdrawn@test.example');
     await admin.patch(`/api/admin/users/${user.id}`).send({ active: false }).expect(200);
-    expect((await supertest(app()).post(`/api/invites/${token}/accept`).send({ password: NEW_PASSWORD })).status).toBe(410);
+    expect((await anonymous(app()).post(`/api/invites/${token}/accept`).send({ password: NEW_PASSWORD })).status).toBe(410);
     const reactivate = await admin.patch(`/api/admin/users/${user.id}`).send({ active: true });
     expect(reactivate.status).toBe(409);
     expect(reactivate.body.error.message).toMatch(/Resend the invitation/);

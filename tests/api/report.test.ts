@@ -1,13 +1,14 @@
 import { randomUUID } from 'node:crypto';
 import { PDFParse } from 'pdf-parse';
 import sharp from 'sharp';
-import supertest from 'supertest';
+import type supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { officeVisitRecordSchema, visitRecordSchema, type VisitRecord } from '../../shared/schemas/visit-record';
 import { loadEnv } from '../../server/config/env';
 import { ReportIssue } from '../../server/modules/reports/report-issues.model';
+import { renderLinks } from '../../server/modules/emails/email-links';
 import { readReportLink, reportLinkKey, signReportLink } from '../../server/modules/reports/report-link';
-import { signedInAgent, useApiApp } from '../api-app';
+import { anonymous, signedInAgent, useApiApp } from '../api-app';
 import { makePress, makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
 import { answer, makeTestBandSet, reading, signaturePng, windingReadings, workToResistanceStep } from '../visit-steps';
@@ -61,9 +62,11 @@ async function closedVisit() {
   return { id, reference: closed.body.reference as string, token: await latestToken(id) };
 }
 
+/** The link as the outbox signs it when sending: the stored e-mail holds only a marker. */
 async function latestToken(visitId: number): Promise<string> {
-  const [rows] = await db.sequelize.query(`SELECT text FROM emails WHERE visit_id = :visitId ORDER BY id DESC LIMIT 1`, { replacements: { visitId } });
-  const text = (rows as { text: string }[])[0]!.text;
+  const [rows] = await db.sequelize.query(`SELECT text, html, link_kind, link_ref FROM emails WHERE visit_id = :visitId ORDER BY id DESC LIMIT 1`, { replacements: { visitId } });
+  const row = (rows as { text: string; html: string; link_kind: 'report' | null; link_ref: number | null }[])[0]!;
+  const { text } = await renderLinks({ linkKind: row.link_kind, linkRef: row.link_ref, html: row.html, text: row.text });
   return /http:\/\/reports\.test\/report\/(\S+)/.exec(text)![1]!;
 }
 
@@ -76,7 +79,7 @@ async function pdfText(pdf: Buffer): Promise<string> {
   }
 }
 
-const publicApi = () => supertest(app());
+const publicApi = () => anonymous(app());
 
 describe('closing a visit queues its report', () => {
   it('puts one report e-mail with the PDF in the outbox in the same transaction as the close', async () => {
@@ -90,6 +93,9 @@ describe('closing a visit queues its report', () => {
     expect(rows[0]).toMatchObject({ status: 'queued', to_address: 'pat@plant.example', attempts: 0, filename: `service-report-${v.reference}.pdf`, content_type: 'application/pdf' });
     expect((rows[0] as { subject: string }).subject).toBe(`Service report ${v.reference} — RP-1, Made-up Stamping (test)`);
     expect(Number((rows[0] as { bytes: string }).bytes)).toBeGreaterThan(5000);
+    // The stored e-mail holds no live link: the outbox signs it again when it sends.
+    const [holding] = await db.sequelize.query(`SELECT id FROM emails WHERE strpos(html, :token) > 0 OR strpos(text, :token) > 0`, { replacements: { token: v.token } });
+    expect(holding).toEqual([]);
   });
 
   it("writes the record's key facts into the e-mail, in the record's words, as text and as HTML", async () => {
@@ -282,5 +288,15 @@ describe('the outbox routes for the office', () => {
     const bad = await manager.post(`/api/emails/${id}/resend`).send({ to: 'not an address' });
     expect(bad.status).toBe(400);
     expect((await manager.post('/api/emails/999999/resend')).status).toBe(404);
+
+    // A corrected report retires the older issue: its e-mail is not sent again with a dead link.
+    await db.sequelize.query(
+      `INSERT INTO report_issues (visit_id, issue_number, nonce, recipient, expires_at) SELECT visit_id, issue_number + 1, nonce, recipient, expires_at FROM report_issues WHERE visit_id = :visitId`,
+      { replacements: { visitId: v.id } },
+    );
+    const stale = await manager.post(`/api/emails/${id}/resend`).send({});
+    expect(stale.status).toBe(409);
+    expect(stale.body.error).toMatchObject({ code: 'report_not_resendable' });
+    expect(stale.body.error.message).toMatch(/corrected report replaced this one/);
   });
 });

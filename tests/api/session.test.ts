@@ -1,7 +1,7 @@
 import supertest from 'supertest';
 import { describe, expect, it } from 'vitest';
 import { SESSION_COOKIE } from '../../server/auth/session';
-import { useApiApp } from '../api-app';
+import { anonymous, useApiApp } from '../api-app';
 import { TEST_PASSWORD, makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
 
@@ -17,7 +17,7 @@ function sessionCookie(res: supertest.Response): string | undefined {
 describe('sign-in, session and sign-out', () => {
   it('signs a technician in, answers who am I on the next request, and signs out', async () => {
     const user = await makeUser('technician', { name: 'Ada Field' });
-    const agent = supertest.agent(app());
+    const agent = anonymous(app());
 
     const signIn = await agent.post('/api/session').send({ email: user.email.toUpperCase(), password: TEST_PASSWORD });
     expect(signIn.status).toBe(200);
@@ -50,7 +50,7 @@ describe('sign-in, session and sign-out', () => {
 
   it('issues a new session id at sign-in, so an id planted before sign-in is worthless', async () => {
     const user = await makeUser('technician');
-    const agent = supertest.agent(app());
+    const agent = anonymous(app());
     // A failed attempt with a session already started would be the attacker's planted id; take the id after a first sign-in instead.
     const first = await agent.post('/api/session').send({ email: user.email, password: TEST_PASSWORD });
     const before = sessionCookie(first)!.split(';')[0];
@@ -63,8 +63,8 @@ describe('sign-in, session and sign-out', () => {
 
   it('refuses a wrong password and an unknown e-mail with the same readable message', async () => {
     const user = await makeUser('technician');
-    const wrong = await supertest(app()).post('/api/session').send({ email: user.email, password: 'not it' });
-    const unknown = await supertest(app()).post('/api/session').send({ email: 'nobody@test.example', password: 'not it' });
+    const wrong = await anonymous(app()).post('/api/session').send({ email: user.email, password: 'not it' });
+    const unknown = await anonymous(app()).post('/api/session').send({ email: 'nobody@test.example', password: 'not it' });
     expect(wrong.status).toBe(401);
     expect(unknown.status).toBe(401);
     expect(wrong.body.error.message).toBe(unknown.body.error.message);
@@ -74,13 +74,13 @@ describe('sign-in, session and sign-out', () => {
 
   it('refuses a deactivated account', async () => {
     const user = await makeUser('technician', { active: false });
-    const res = await supertest(app()).post('/api/session').send({ email: user.email, password: TEST_PASSWORD });
+    const res = await anonymous(app()).post('/api/session').send({ email: user.email, password: TEST_PASSWORD });
     expect(res.status).toBe(401);
   });
 
   it('ends the session of a user deactivated while signed in', async () => {
     const user = await makeUser('technician');
-    const agent = supertest.agent(app());
+    const agent = anonymous(app());
     await agent.post('/api/session').send({ email: user.email, password: TEST_PASSWORD }).expect(200);
     await user.update({ active: false });
     const res = await agent.get('/api/presses');
@@ -88,7 +88,7 @@ describe('sign-in, session and sign-out', () => {
   });
 
   it('names each bad field of a malformed sign-in', async () => {
-    const res = await supertest(app()).post('/api/session').send({ email: 'not-an-email', password: '' });
+    const res = await anonymous(app()).post('/api/session').send({ email: 'not-an-email', password: '' });
     expect(res.status).toBe(400);
     expect(res.body.error.fields).toEqual({
       email: 'Enter a valid e-mail address, like name@company.com',
@@ -101,13 +101,13 @@ describe('sign-in, session and sign-out', () => {
     // This app allows 3 failures per 15-minute window, counted per client address.
     const statuses: number[] = [];
     for (let i = 0; i < 4; i++) {
-      statuses.push((await supertest(strict.app()).post('/api/session').send({ email: user.email, password: 'wrong' })).status);
+      statuses.push((await anonymous(strict.app()).post('/api/session').send({ email: user.email, password: 'wrong' })).status);
     }
     expect(statuses).toEqual([401, 401, 401, 429]);
-    const limited = await supertest(strict.app()).post('/api/session').send({ email: user.email, password: 'wrong' });
+    const limited = await anonymous(strict.app()).post('/api/session').send({ email: user.email, password: 'wrong' });
     expect(limited.body.error.message).toMatch(/Wait 15 minutes/);
     // The right password is refused too while the limit holds: the limiter answers first.
-    const right = await supertest(strict.app()).post('/api/session').send({ email: user.email, password: TEST_PASSWORD });
+    const right = await anonymous(strict.app()).post('/api/session').send({ email: user.email, password: TEST_PASSWORD });
     expect(right.status).toBe(429);
   });
 });
@@ -116,7 +116,7 @@ describe('session cookie in production', () => {
   const prod = useApiApp(db, { NODE_ENV: 'production', TRUST_PROXY: '1' });
   it('is marked Secure behind an HTTPS proxy', async () => {
     const user = await makeUser('admin');
-    const res = await supertest(prod.app()).post('/api/session').set('X-Forwarded-Proto', 'https').send({ email: user.email, password: TEST_PASSWORD });
+    const res = await anonymous(prod.app()).post('/api/session').set('X-Forwarded-Proto', 'https').send({ email: user.email, password: TEST_PASSWORD });
     expect(res.status).toBe(200);
     expect(sessionCookie(res)).toMatch(/;\s*Secure/i);
   });

@@ -51,7 +51,7 @@ export async function inviteUser(actor: SessionUser, input: UserInviteInput, mai
     );
     const issued = await issueInvite(created.id, actor.id, transaction);
     await audit({ visitId: null, actorId: actor.id, action: 'user_invited', detail: { userId: created.id, email: created.email, role: created.role } }, transaction);
-    await sendInviteEmail(mailer, actor.id, { to: created.email, name: created.name, invitedBy: actor.name, token: issued.token, expiresAt: issued.invite.expiresAt }, transaction);
+    await sendInviteEmail(mailer, actor.id, { to: created.email, name: created.name, invitedBy: actor.name, inviteId: issued.invite.id, expiresAt: issued.invite.expiresAt }, transaction);
     return created;
   });
   return adminUser(user.id);
@@ -65,7 +65,7 @@ export async function resendInvite(actor: SessionUser, userId: number, mailer: I
     if (hasPassword(user)) throw new AppError(409, 'deactivated', `${user.name}'s account was deactivated. Reactivate it instead of sending an invitation.`);
     const issued = await issueInvite(user.id, actor.id, transaction);
     await audit({ visitId: null, actorId: actor.id, action: 'user_invite_resent', detail: { userId: user.id } }, transaction);
-    await sendInviteEmail(mailer, actor.id, { to: user.email, name: user.name, invitedBy: actor.name, token: issued.token, expiresAt: issued.invite.expiresAt }, transaction);
+    await sendInviteEmail(mailer, actor.id, { to: user.email, name: user.name, invitedBy: actor.name, inviteId: issued.invite.id, expiresAt: issued.invite.expiresAt }, transaction);
   });
   return adminUser(userId);
 }

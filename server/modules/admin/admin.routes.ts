@@ -1,18 +1,19 @@
 import { Router } from 'express';
 import { requireRole } from '../../auth/require-role';
-import { adminBandSetRoutes } from './band-sets.routes';
-import { adminFirmwareRuleRoutes } from './firmware-rules.routes';
-import { adminProcedureRoutes } from './procedures.routes';
+import { versionedRoutes } from '../reference/versioned-routes';
+import { bandSets } from './band-sets';
+import { firmwareRules } from './firmware-rules';
+import { procedureRoutes } from './procedures';
 import { adminUserRoutes } from './admin-users.routes';
 import { outboxInviteMailer } from './invite-email';
 
 /** Everything under /api/admin is for administrators only (DESIGN.md §2): one guard in front of all of it. */
-export function adminRoutes(deps: { publicBaseUrl: string }): Router {
+export function adminRoutes(): Router {
   const router = Router();
   router.use(requireRole('admin'));
-  router.use('/users', adminUserRoutes(outboxInviteMailer(deps.publicBaseUrl)));
-  router.use('/band-sets', adminBandSetRoutes());
-  router.use('/procedures', adminProcedureRoutes());
-  router.use('/firmware-rules', adminFirmwareRuleRoutes());
+  router.use('/users', adminUserRoutes(outboxInviteMailer));
+  router.use('/band-sets', versionedRoutes(bandSets));
+  router.use('/procedures', procedureRoutes());
+  router.use('/firmware-rules', versionedRoutes(firmwareRules));
   return router;
 }

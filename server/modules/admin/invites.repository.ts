@@ -11,5 +11,5 @@ export async function revokeOpenInvites(userId: number, transaction?: Transactio
   await UserInvite.update({ revokedAt: new Date() }, { where: { userId, usedAt: null, revokedAt: null }, transaction });
 }
 
-export const insertInvite = (values: { userId: number; tokenHash: string; expiresAt: Date; createdBy: number | null }, transaction?: Transaction) =>
+export const insertInvite = (values: { userId: number; tokenHash: string; nonce: string; expiresAt: Date; createdBy: number | null }, transaction?: Transaction) =>
   UserInvite.create({ ...values, usedAt: null, revokedAt: null }, { transaction });

@@ -2,6 +2,7 @@ import type { Transaction } from 'sequelize';
 import type { InvitePreview } from '../../../shared/schemas/admin-users';
 import { hashPassword } from '../../auth/password';
 import { AppError } from '../../lib/errors';
+import { audit } from '../audit/audit';
 import { User } from '../users/users.model';
 import type { UserInvite } from './invite.model';
 import { INVITE_LIFETIME_MS, hashInviteToken, newInviteToken } from './invite-token';
@@ -9,12 +10,15 @@ import { findInviteByHash, insertInvite, revokeOpenInvites } from './invites.rep
 
 const ASK_AGAIN = 'Ask your administrator to send you a new invitation.';
 
-/** Replaces any open invitation of the person with a new one; the caller mails the returned token. */
+/**
+ * Replaces any open invitation of the person with a new one. The caller queues the e-mail with a
+ * reference to the returned invitation; the token is made again when the e-mail is sent.
+ */
 export async function issueInvite(userId: number, actorId: number | null, transaction?: Transaction, now = new Date()) {
   await revokeOpenInvites(userId, transaction);
-  const { token, tokenHash } = newInviteToken();
-  const invite = await insertInvite({ userId, tokenHash, expiresAt: new Date(now.getTime() + INVITE_LIFETIME_MS), createdBy: actorId }, transaction);
-  return { token, invite };
+  const { nonce, tokenHash } = newInviteToken();
+  const invite = await insertInvite({ userId, tokenHash, nonce, expiresAt: new Date(now.getTime() + INVITE_LIFETIME_MS), createdBy: actorId }, transaction);
+  return { invite };
 }
 
 function refuseUnusable(invite: UserInvite | null, now: Date): asserts invite is UserInvite {
@@ -41,6 +45,7 @@ export async function acceptInvite(token: string, password: string, now = new Da
     const user = (await User.findByPk(invite.userId, { transaction }))!;
     await user.update({ passwordHash, active: true }, { transaction });
     await invite.update({ usedAt: now }, { transaction });
+    await audit({ visitId: null, actorId: user.id, action: 'user_invite_accepted', detail: { userId: user.id, inviteId: invite.id } }, transaction);
     return { email: user.email };
   });
 }

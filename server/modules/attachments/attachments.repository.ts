@@ -1,4 +1,4 @@
-import { Op, type CreationAttributes, type WhereOptions } from 'sequelize';
+import { Op, type CreationAttributes, type Transaction, type WhereOptions } from 'sequelize';
 import { Attachment } from './attachments.model';
 import type { AttachmentListQuery } from './attachments.schema';
 
@@ -16,6 +16,6 @@ export const findAttachment = (visitId: number, id: string) => Attachment.findOn
 export const findAttachmentsByIds = (ids: string[]) => (ids.length ? Attachment.findAll({ where: { id: { [Op.in]: ids } } }) : Promise.resolve([]));
 
 /** One INSERT for all rows: they are stored together or not at all. */
-export const insertAttachments = (rows: NewAttachment[]) => Attachment.bulkCreate(rows);
+export const insertAttachments = (rows: NewAttachment[], transaction?: Transaction) => Attachment.bulkCreate(rows, { transaction });
 
 export const deleteAttachment = (attachment: Attachment) => attachment.destroy();

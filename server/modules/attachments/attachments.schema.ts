@@ -1,4 +1,6 @@
 import { z } from 'zod';
+import { idNumber } from '../../../shared/schemas/numbers';
+import { nameText, text } from '../../../shared/schemas/text';
 
 // Request and response shapes of the attachment routes. They belong in shared/schemas/ once the
 // client's photo capture uses them; they sit here while this module is the only user.
@@ -6,13 +8,12 @@ import { z } from 'zod';
 export const MAX_PHOTOS_PER_UPLOAD = 6;
 export const MAX_CAPTION_LENGTH = 300;
 
-export const visitParamsSchema = z.object({ visitId: z.coerce.number().int().positive() });
+export const visitParamsSchema = z.object({ visitId: idNumber() });
 export const attachmentParamsSchema = visitParamsSchema.extend({ id: z.uuid('An attachment id is a UUID') });
 
 const caption = z
   .string({ error: 'Send the caption once, as text; for one caption per photo use captions' })
-  .trim()
-  .max(MAX_CAPTION_LENGTH, `A caption can be at most ${MAX_CAPTION_LENGTH} characters; shorten it`);
+  .pipe(text({ max: MAX_CAPTION_LENGTH, maxMessage: `A caption can be at most ${MAX_CAPTION_LENGTH} characters; shorten it` }));
 
 const uploadId = z.uuid('An upload id is a UUID made by the tablet');
 
@@ -70,7 +71,7 @@ export type PhotoUploadFields = z.infer<typeof photoUploadFieldsSchema>;
 
 export const attachmentListQuerySchema = z.object({
   kind: z.enum(['photo', 'signature']).optional(),
-  stepId: z.string().trim().min(1).max(100).optional(),
+  stepId: nameText({ min: 1, max: 100 }).optional(),
 });
 export type AttachmentListQuery = z.infer<typeof attachmentListQuerySchema>;
 

@@ -1,5 +1,6 @@
 import { randomUUID } from 'node:crypto';
-import { DatabaseError, UniqueConstraintError } from 'sequelize';
+import fs from 'node:fs/promises';
+import { DatabaseError, UniqueConstraintError, type Transaction } from 'sequelize';
 import type { SessionUser } from '../../../shared/schemas/session';
 import { AppError } from '../../lib/errors';
 import { logger } from '../../lib/logger';
@@ -10,11 +11,18 @@ import { deleteAttachment, findAttachment, findAttachmentsByIds, insertAttachmen
 import { MAX_PHOTOS_PER_UPLOAD, type AttachmentDto, type AttachmentListQuery, type PhotoUploadFields } from './attachments.schema';
 import type { FileStorage, StoredFile } from './storage';
 
-export interface IncomingPhoto {
-  bytes: Buffer;
+/** One photo of an upload: its bytes, or the temp file multer streamed them to. */
+export type IncomingPhoto = (
+  | { bytes: Buffer }
+  | { path: string; size: number }
+) & {
   /** The name the tablet gave the file: used in messages only, never for the type or the stored name. */
   originalName: string;
-}
+};
+
+const sizeOf = (photo: IncomingPhoto) => ('bytes' in photo ? photo.bytes.length : photo.size);
+/** Read one at a time while processing, so an upload never sits in memory whole. */
+const bytesOf = (photo: IncomingPhoto) => ('bytes' in photo ? Promise.resolve(photo.bytes) : fs.readFile(photo.path));
 
 export interface AttachmentServiceDeps {
   storage: FileStorage;
@@ -72,9 +80,17 @@ export function createAttachmentService({ storage, maxUploadBytes }: AttachmentS
     }
   }
 
-  /** Writes the files and rows of processed images together: all of them, or none. */
-  async function storeAll(visitId: number, user: SessionUser, items: { id: string; kind: AttachmentKind; stepId: string | null; caption: string | null; image: ProcessedImage }[]) {
-    const written: string[] = [];
+  /**
+   * Writes the files and rows of processed images together: all of them, or none. Inside a
+   * transaction, the caller removes the files (the `written` list) when it does not commit.
+   */
+  async function storeAll(
+    visitId: number,
+    user: SessionUser,
+    items: { id: string; kind: AttachmentKind; stepId: string | null; caption: string | null; image: ProcessedImage }[],
+    transaction?: Transaction,
+    written: string[] = [],
+  ) {
     try {
       const rows: NewAttachment[] = [];
       // Rows of one INSERT would share a timestamp; a millisecond apart, a listing keeps the order they were sent in.
@@ -89,9 +105,9 @@ export function createAttachmentService({ storage, maxUploadBytes }: AttachmentS
         written.push(thumbKey);
         rows.push({ id, visitId, kind, stepId, caption, storageKey, thumbKey, mimeType: image.mimeType, bytes: image.data.length, width: image.width, height: image.height, createdBy: user.id, createdAt: new Date(now + i) });
       }
-      return await insertAttachments(rows);
+      return await insertAttachments(rows, transaction);
     } catch (err) {
-      await removeFiles(written);
+      await removeFiles(written.splice(0));
       if (isClosedVisitRefusal(err)) throw closedMeanwhile(visitId);
       throw err;
     }
@@ -132,6 +148,11 @@ export function createAttachmentService({ storage, maxUploadBytes }: AttachmentS
   }
 
   return {
+    /** The access an upload needs, checked before its body is read. */
+    async checkUploadAccess(user: SessionUser, visitId: number): Promise<void> {
+      await loadVisitForWrite(user, visitId);
+    },
+
     async list(user: SessionUser, visitId: number, q: AttachmentListQuery = {}): Promise<AttachmentDto[]> {
       await loadVisitForRead(user, visitId);
       return (await listAttachments(visitId, q)).map(toAttachmentDto);
@@ -142,6 +163,7 @@ export function createAttachmentService({ storage, maxUploadBytes }: AttachmentS
      * was already stored by an earlier try with the same ids.
      */
     async uploadPhotos(user: SessionUser, visitId: number, files: IncomingPhoto[], fields: PhotoUploadFields): Promise<{ created: boolean; items: AttachmentDto[] }> {
+      // Checked before the body was read (checkUploadAccess) and again now: the visit may have closed meanwhile.
       await loadVisitForWrite(user, visitId);
       if (files.length === 0) {
         throw new AppError(400, 'no_file', `No photo arrived. Choose or take up to ${MAX_PHOTOS_PER_UPLOAD} photos and send them in the form field "photos".`);
@@ -153,9 +175,9 @@ export function createAttachmentService({ storage, maxUploadBytes }: AttachmentS
       // Every photo is checked and re-encoded before the first one is stored.
       const processed = [];
       for (const p of fresh) {
-        if (p.file.bytes.length > maxUploadBytes) throw tooLarge(maxUploadBytes);
+        if (sizeOf(p.file) > maxUploadBytes) throw tooLarge(maxUploadBytes);
         try {
-          processed.push({ id: p.id, kind: 'photo' as const, stepId: fields.stepId ?? null, caption: p.caption, image: await processImage(p.file.bytes) });
+          processed.push({ id: p.id, kind: 'photo' as const, stepId: fields.stepId ?? null, caption: p.caption, image: await processImage(await bytesOf(p.file)) });
         } catch (err) {
           if (err instanceof AppError) throw new AppError(err.status, err.code, `${p.label} ${err.message} Nothing from this upload was stored.`);
           throw err;
@@ -180,9 +202,12 @@ export function createAttachmentService({ storage, maxUploadBytes }: AttachmentS
       return { created: created.length > 0, items: plan.map((p) => toAttachmentDto(byId.get(p.id)!)) };
     },
 
-    /** The customer's sign-off (PNG) for the close-out; stored like a photo, kind 'signature'. */
-    async storeSignature(user: SessionUser, visitId: number, png: Buffer): Promise<AttachmentDto> {
-      await loadVisitForWrite(user, visitId);
+    /**
+     * Checks and re-encodes the customer's sign-off (PNG) before the close-out's transaction starts.
+     * `store` writes it inside that transaction (kind 'signature'); `discard` removes its files
+     * again when the transaction does not commit, so a refused close leaves no signature behind.
+     */
+    async prepareSignature(png: Buffer): Promise<PreparedSignature> {
       if (png.length === 0) throw new AppError(400, 'no_file', 'The signature is empty. Ask the customer to sign again.');
       if (png.length > maxUploadBytes) throw tooLarge(maxUploadBytes);
       let image: ProcessedImage;
@@ -192,8 +217,20 @@ export function createAttachmentService({ storage, maxUploadBytes }: AttachmentS
         if (err instanceof AppError) throw new AppError(err.status, err.code, `The signature ${err.message}`);
         throw err;
       }
-      const [row] = await storeAll(visitId, user, [{ id: randomUUID(), kind: 'signature', stepId: null, caption: null, image }]);
-      return toAttachmentDto(row!);
+      const written: string[] = [];
+      return {
+        async store(user, visitId, transaction) {
+          const [row] = await storeAll(visitId, user, [{ id: randomUUID(), kind: 'signature', stepId: null, caption: null, image }], transaction, written);
+          return toAttachmentDto(row!);
+        },
+        discard: () => removeFiles(written.splice(0)),
+      };
+    },
+
+    /** Stores a sign-off outside a close-out (its own statement). */
+    async storeSignature(user: SessionUser, visitId: number, png: Buffer): Promise<AttachmentDto> {
+      await loadVisitForWrite(user, visitId);
+      return (await this.prepareSignature(png)).store(user, visitId);
     },
 
     /** The stored picture (`file`) or its thumbnail (`thumb`), for streaming to the browser. */
@@ -230,6 +267,11 @@ export function createAttachmentService({ storage, maxUploadBytes }: AttachmentS
   };
 }
 
+export interface PreparedSignature {
+  store(user: SessionUser, visitId: number, transaction?: Transaction): Promise<AttachmentDto>;
+  discard(): Promise<void>;
+}
+
 export type AttachmentService = ReturnType<typeof createAttachmentService>;
 
 let configured: AttachmentService | undefined;
@@ -240,10 +282,19 @@ export function configureAttachments(deps: AttachmentServiceDeps): AttachmentSer
   return configured;
 }
 
-/** Stores the customer's sign-off PNG on an open visit as a kind='signature' attachment (for the close-out). */
-export function storeSignature(user: SessionUser, visitId: number, png: Buffer): Promise<AttachmentDto> {
+function configuredService(): AttachmentService {
   if (!configured) throw new Error('attachment storage is not configured: mount attachmentRoutes() (or call configureAttachments) first');
-  return configured.storeSignature(user, visitId, png);
+  return configured;
+}
+
+/** Stores the customer's sign-off PNG on an open visit as a kind='signature' attachment. */
+export function storeSignature(user: SessionUser, visitId: number, png: Buffer): Promise<AttachmentDto> {
+  return configuredService().storeSignature(user, visitId, png);
+}
+
+/** Checks a sign-off PNG for the close-out, which stores it inside its own transaction. */
+export function prepareSignature(png: Buffer): Promise<PreparedSignature> {
+  return configuredService().prepareSignature(png);
 }
 
 export function tooLarge(maxBytes: number): AppError {

@@ -1,7 +1,10 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import { EMAIL_STATUSES, type EmailStatus } from '../../../shared/schemas/email';
 
-export const EMAIL_STATUSES = ['queued', 'sending', 'sent', 'failed'] as const;
-export type EmailStatus = (typeof EMAIL_STATUSES)[number];
+export const LINK_KINDS = ['invite', 'report'] as const;
+export type LinkKind = (typeof LINK_KINDS)[number];
+
+export { EMAIL_STATUSES, type EmailStatus };
 
 /** One message in the outbox: queued → sending → sent, or back to queued with a later try, or failed. */
 export class Email extends Model<InferAttributes<Email>, InferCreationAttributes<Email>> {
@@ -12,6 +15,9 @@ export class Email extends Model<InferAttributes<Email>, InferCreationAttributes
   declare subject: string;
   declare html: string;
   declare text: string;
+  /** What the {{link}} marker in html/text is made from at send time; the row holds no live link. */
+  declare linkKind: CreationOptional<LinkKind | null>;
+  declare linkRef: CreationOptional<number | null>;
   declare status: CreationOptional<EmailStatus>;
   declare attempts: CreationOptional<number>;
   declare lastError: CreationOptional<string | null>;
@@ -44,6 +50,8 @@ export function initEmailModels(sequelize: Sequelize): void {
       subject: { type: DataTypes.TEXT, allowNull: false },
       html: { type: DataTypes.TEXT, allowNull: false },
       text: { type: DataTypes.TEXT, allowNull: false },
+      linkKind: { type: DataTypes.TEXT, allowNull: true, defaultValue: null },
+      linkRef: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
       status: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'queued' },
       attempts: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
       lastError: { type: DataTypes.TEXT, allowNull: true, defaultValue: null },

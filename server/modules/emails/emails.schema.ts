@@ -1,11 +1,13 @@
 import { z } from 'zod';
+import { pageNumber, pageSize } from '../../../shared/schemas/common';
+import { idNumber } from '../../../shared/schemas/numbers';
 import { EMAIL_STATUSES } from './emails.model';
 
 export const emailListQuerySchema = z.object({
-  visitId: z.coerce.number().int().positive().optional(),
+  visitId: idNumber().optional(),
   status: z.enum(EMAIL_STATUSES, 'Status is one of queued, sending, sent or failed').optional(),
-  page: z.coerce.number().int().min(1).default(1),
-  pageSize: z.coerce.number().int().min(1).max(100).default(25),
+  page: pageNumber.default(1),
+  pageSize: pageSize(100).default(25),
 });
 export type EmailListQuery = z.infer<typeof emailListQuerySchema>;
 
@@ -15,19 +17,5 @@ export const emailResendSchema = z.object({
 });
 export type EmailResendInput = z.infer<typeof emailResendSchema>;
 
-export interface EmailDto {
-  id: number;
-  visitId: number | null;
-  kind: string;
-  to: string;
-  subject: string;
-  status: (typeof EMAIL_STATUSES)[number];
-  attempts: number;
-  lastError: string | null;
-  nextAttemptAt: string | null;
-  sentAt: string | null;
-  messageId: string | null;
-  attachments: { filename: string; contentType: string }[];
-  createdAt: string;
-  updatedAt: string;
-}
+// The answer's shape is shared with the client's outbox list.
+export type { EmailDto } from '../../../shared/schemas/email';

@@ -4,6 +4,7 @@ import type { SessionUser } from '../../../shared/schemas/session';
 import { AppError } from '../../lib/errors';
 import { toPage } from '../../lib/paging';
 import { audit } from '../audit/audit';
+import { reportResendRefusal } from '../reports/reports.service';
 import { Email, EmailAttachment } from './emails.model';
 import type { EmailDto, EmailListQuery, EmailResendInput } from './emails.schema';
 
@@ -45,11 +46,27 @@ export async function listEmails(q: EmailListQuery): Promise<Page<EmailDto>> {
   return toPage(rows.map(toEmailDto), count, { page: q.page, pageSize: q.pageSize });
 }
 
-/** Puts a message back in the outbox to go out now (after a failure, or when the customer lost it). */
+/**
+ * Puts a report e-mail back in the outbox to go out now (after a failure, or when the customer lost
+ * it), to the visit's contact or to an address the manager types for this report. Nothing else is
+ * sent again from here: an invitation is a sign-in credential, so only an administrator re-issues it
+ * (a fresh link, the old one retired) and only to the invited person's own address.
+ */
 export async function resendEmail(user: SessionUser, id: number, input: EmailResendInput): Promise<EmailDto> {
   return Email.sequelize!.transaction(async (transaction) => {
     const email = await Email.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
     if (!email) throw new AppError(404, 'not_found', `E-mail ${id} was not found.`);
+    if (email.kind !== 'visit_report') {
+      throw new AppError(
+        409,
+        'not_resendable',
+        email.kind === 'user_invite'
+          ? 'Invitations are not sent again from here. An administrator sends a new invitation from People; it goes to the invited address and retires the old link.'
+          : 'Only report e-mails can be sent again from here.',
+      );
+    }
+    const refused = await reportResendRefusal(email.linkKind === 'report' ? email.linkRef : null, transaction);
+    if (refused) throw new AppError(409, 'report_not_resendable', `${refused} Nothing was sent.`);
     if (email.status === 'sending') throw new AppError(409, 'email_sending', 'This e-mail is being sent right now. Look again in a minute before resending.');
     const before = { status: email.status, to: email.toAddress };
     await email.update({ status: 'queued', attempts: 0, nextAttemptAt: new Date(), sentAt: null, toAddress: input.to ?? email.toAddress }, { transaction });

@@ -1,7 +1,8 @@
 import type { Transaction } from 'sequelize';
 import { logger } from '../../lib/logger';
 import { audit } from '../audit/audit';
-import { Email, EmailAttachment } from './emails.model';
+import { LinkUnavailable, renderLinks } from './email-links';
+import { Email, EmailAttachment, type LinkKind } from './emails.model';
 import { mailer } from './mail-transport';
 import { MAX_ATTEMPTS, describeSendError, isPermanentSmtpError, retryDelayMs } from './retry-policy';
 
@@ -11,8 +12,11 @@ export interface NewEmail {
   kind: string;
   to: string;
   subject: string;
+  /** Bodies with the {{link}} marker where the link goes (never the link itself when it is a credential). */
   html: string;
   text: string;
+  /** What the link is made from when the message is sent. */
+  link?: { kind: LinkKind; ref: number };
   attachments?: { filename: string; contentType: string; content: Buffer }[];
   createdBy?: number | null;
 }
@@ -23,7 +27,17 @@ export interface NewEmail {
  */
 export async function enqueueEmail(email: NewEmail, transaction?: Transaction): Promise<Email> {
   const row = await Email.create(
-    { visitId: email.visitId ?? null, kind: email.kind, toAddress: email.to, subject: email.subject, html: email.html, text: email.text, createdBy: email.createdBy ?? null },
+    {
+      visitId: email.visitId ?? null,
+      kind: email.kind,
+      toAddress: email.to,
+      subject: email.subject,
+      html: email.html,
+      text: email.text,
+      linkKind: email.link?.kind ?? null,
+      linkRef: email.link?.ref ?? null,
+      createdBy: email.createdBy ?? null,
+    },
     { transaction },
   );
   for (const a of email.attachments ?? []) {
@@ -61,12 +75,13 @@ async function sendOne(id: number, now: Date, run: OutboxRun): Promise<void> {
   const email = (await Email.findByPk(id, { include: [{ model: EmailAttachment, as: 'attachments' }] }))!;
   const { transporter, from } = mailer();
   try {
+    const body = await renderLinks(email);
     const info = (await transporter.sendMail({
       from,
       to: email.toAddress,
       subject: email.subject,
-      html: email.html,
-      text: email.text,
+      html: body.html,
+      text: body.text,
       attachments: (email.attachments ?? []).map((a) => ({ filename: a.filename, contentType: a.contentType, content: a.content })),
     })) as { messageId?: string; response?: string };
     await email.update({ status: 'sent', sentAt: new Date(), messageId: info.messageId ?? null, lastError: null });
@@ -74,7 +89,8 @@ async function sendOne(id: number, now: Date, run: OutboxRun): Promise<void> {
     await audit({ visitId: email.visitId, actorId: null, action: 'email_sent', detail: { emailId: email.id, kind: email.kind, to: email.toAddress, messageId: info.messageId ?? null, attempt: email.attempts, smtpResponse: info.response ?? null } });
   } catch (err) {
     const error = describeSendError(err);
-    const giveUp = isPermanentSmtpError(err) || email.attempts >= MAX_ATTEMPTS;
+    // A link that can no longer be made (replaced invitation, corrected report) will not come back.
+    const giveUp = err instanceof LinkUnavailable || isPermanentSmtpError(err) || email.attempts >= MAX_ATTEMPTS;
     if (giveUp) {
       await email.update({ status: 'failed', lastError: error });
       run.failed++;

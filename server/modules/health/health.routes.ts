@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import type { Sequelize } from 'sequelize';
+import { DATABASE_UNAVAILABLE } from '../../lib/errors';
 
 /** Open to anyone (load balancers, the start script): says whether the database answers. */
 export function healthRoutes(sequelize: Sequelize): Router {
@@ -11,7 +12,8 @@ export function healthRoutes(sequelize: Sequelize): Router {
       const migrations = (rows as { migrations: number }[])[0]?.migrations ?? 0;
       res.json({ status: 'ok', database: { state: 'up', migrations, latencyMs: Math.round(performance.now() - started) } });
     } catch {
-      res.status(503).json({ status: 'degraded', database: { state: 'down' } });
+      // The pools reconnect by themselves once the database is back; this answer turns to 200 then.
+      res.set('Retry-After', '5').status(503).json({ status: 'degraded', message: DATABASE_UNAVAILABLE, database: { state: 'down' } });
     }
   });
   return router;

@@ -25,6 +25,22 @@ describe('CSV cells', () => {
     expect(csvCell('a=b')).toBe('a=b');
   });
 
+  // OWASP "CSV Injection" (owasp.org/www-community/attacks/CSV_Injection): no cell may begin with
+  // = + - @ tab (0x09) or carriage return (0x0D), and the field separator, "," or ";", must not let
+  // a formula start a new cell in the middle of the text.
+  it('defuses a formula after a semicolon, which splits cells in ";" locales (OWASP CSV Injection)', () => {
+    expect(csvCell('Semi;=HYPERLINK("http://evil.example","y")')).toBe(`"'Semi;=HYPERLINK(""http://evil.example"",""y"")"`);
+    expect(csvCell('a;+cmd')).toBe(`"'a;+cmd"`);
+    expect(csvCell('a;-2+3')).toBe(`"'a;-2+3"`);
+    expect(csvCell('a;@SUM(A1)')).toBe(`"'a;@SUM(A1)"`);
+    expect(csvCell('Bay 2; press 4')).toBe('"Bay 2; press 4"');
+  });
+
+  it('defuses cells that start with a tab or a carriage return (OWASP CSV Injection)', () => {
+    expect(csvCell('\t=1+1')).toBe("'\t=1+1");
+    expect(csvCell('\r=1+1')).toBe(`"'\r=1+1"`);
+  });
+
   it('ends each record with CRLF (RFC 4180 rule 1)', () => {
     expect(csvRecord(['V-000001', 'x,y', 3])).toBe('V-000001,"x,y",3\r\n');
   });

@@ -9,6 +9,7 @@ import { managerFigures } from './figures.service';
 import { getOfficeVisitRecord } from '../reports/reports.service';
 import { auditTrail, technicianOptions, visitTable } from './manager.service';
 import { pressHistory } from './press-history.service';
+import { assertDatabaseTimeZone } from './time-zones';
 import { visitCsvChunks } from './visit-export';
 
 /** The service manager's screens: all visits, the export, figures, press history, a visit's record and audit trail. */
@@ -18,19 +19,30 @@ export function managerRoutes(): Router {
   const id = validate('params', idParamSchema);
 
   router.get('/visits', validate('query', visitTableQuerySchema), async (req, res) => {
-    res.json(await visitTable(valid(req, 'query', visitTableQuerySchema)));
+    const query = valid(req, 'query', visitTableQuerySchema);
+    await assertDatabaseTimeZone(query.tz);
+    res.json(await visitTable(query));
   });
 
   // Streamed: each batch is written as it arrives, and writing waits while the client catches up.
+  // The whole query is checked, and the first batch read, before the first byte: a refusal or a
+  // failing query is still an ordinary JSON error, not a 200 cut short.
   router.get('/visits/export.csv', validate('query', visitTableFilterSchema), async (req, res) => {
     const filter = valid(req, 'query', visitTableFilterSchema);
+    await assertDatabaseTimeZone(filter.tz);
+    const chunks = visitCsvChunks(filter);
+    const first = await chunks.next();
     const day = new Date().toISOString().slice(0, 10);
     res.setHeader('Content-Type', 'text/csv; charset=utf-8');
     res.setHeader('Content-Disposition', `attachment; filename="crankwise-visits-${day}.csv"`);
     res.setHeader('Cache-Control', 'no-store');
     try {
-      for await (const chunk of visitCsvChunks(filter)) {
-        if (res.destroyed) return; // the person cancelled the download: stop querying
+      for (let next = first; !next.done; next = await chunks.next()) {
+        const chunk = next.value;
+        if (res.destroyed) {
+          await chunks.return(undefined); // the person cancelled the download: stop querying
+          return;
+        }
         if (!res.write(chunk)) await new Promise<void>((resolve) => res.once('drain', resolve).once('close', resolve));
       }
       res.end();
@@ -56,7 +68,9 @@ export function managerRoutes(): Router {
   });
 
   router.get('/figures', validate('query', figuresQuerySchema), async (req, res) => {
-    res.json(await managerFigures(valid(req, 'query', figuresQuerySchema)));
+    const query = valid(req, 'query', figuresQuerySchema);
+    await assertDatabaseTimeZone(query.tz);
+    res.json(await managerFigures(query));
   });
 
   router.get('/presses/:id/history', id, async (req, res) => {

@@ -26,11 +26,15 @@ export function exportHeader(tz: string): string[] {
   ];
 }
 
-/** The CSV export of the filtered visits, produced batch by batch for the route to write as it goes. */
+/**
+ * The CSV export of the filtered visits, produced batch by batch for the route to write as it goes.
+ * The first chunk (header and first batch) comes only after the first query has answered.
+ */
 export async function* visitCsvChunks(filter: VisitTableFilter): AsyncGenerator<string> {
-  yield UTF8_BOM + csvRecord(exportHeader(filter.tz));
+  let header = UTF8_BOM + csvRecord(exportHeader(filter.tz));
   for await (const batch of visitBatches(filter)) {
-    yield batch
+    yield header +
+      batch
       .map((r) =>
         csvRecord([
           r.reference,
@@ -52,5 +56,7 @@ export async function* visitCsvChunks(filter: VisitTableFilter): AsyncGenerator<
         ]),
       )
       .join('');
+    header = '';
   }
+  if (header) yield header;
 }

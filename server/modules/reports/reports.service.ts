@@ -4,6 +4,7 @@ import { audit } from '../audit/audit';
 import { Attachment } from '../attachments/attachments.model';
 import type { FileStorage } from '../attachments/storage';
 import { Email } from '../emails/emails.model';
+import { LINK_MARK, LinkUnavailable, registerLinkRenderer } from '../emails/email-links';
 import { enqueueEmail } from '../emails/outbox';
 import { visitReference } from '../../../shared/format/visit-reference';
 import { Visit } from '../visits/visits.model';
@@ -26,9 +27,38 @@ export interface ReportSettings {
 
 let configured: ReportSettings | undefined;
 
+const reportLinkUrl = (token: string) => `${settings().publicBaseUrl}/report/${token}`;
+
 /** Sets who the reports come from, where links point and where the pictures are (once, when the app is built). */
 export function configureReports(settings: ReportSettings): void {
   configured = settings;
+  registerLinkRenderer('report', async (issueId) => reportLinkUrl(await signableIssue(issueId)));
+}
+
+/**
+ * The signed link of one report issue, made again from the issue row and the key when the e-mail is
+ * sent (the stored e-mail holds only a marker). Refused when a corrected report replaced the issue or
+ * its link has expired: sending it would give the customer a link that does not open.
+ */
+async function signableIssue(issueId: number, transaction?: Transaction): Promise<string> {
+  const issue = await ReportIssue.findByPk(issueId, { transaction });
+  if (!issue) throw new LinkUnavailable('Not sent: the report issue of this e-mail no longer exists.');
+  const newest: number = (await ReportIssue.max('issueNumber', { where: { visitId: issue.visitId }, transaction })) ?? 0;
+  if (newest !== issue.issueNumber) throw new LinkUnavailable('Not sent: a corrected report replaced this one; its link no longer opens.');
+  if (issue.expiresAt.getTime() <= Date.now()) throw new LinkUnavailable(`Not sent: the report link expired on ${issue.expiresAt.toISOString().slice(0, 10)}.`);
+  return signReportLink(settings().linkKey, { visitId: issue.visitId, issueNumber: issue.issueNumber, expiresAt: issue.expiresAt.getTime() / 1000 }, issue.nonce);
+}
+
+/** Why a report e-mail cannot go out again, or null when it can (checked before a manager's resend). */
+export async function reportResendRefusal(issueId: number | null, transaction?: Transaction): Promise<string | null> {
+  if (issueId === null) return 'This report e-mail was stored before links were kept apart from e-mails and cannot be sent again.';
+  try {
+    await signableIssue(issueId, transaction);
+    return null;
+  } catch (err) {
+    if (err instanceof LinkUnavailable) return err.message.replace(/^Not sent: /, '').replace(/^./, (c) => c.toUpperCase());
+    throw err;
+  }
 }
 
 function settings(): ReportSettings {
@@ -54,14 +84,12 @@ function imagesOf(visitId: number, transaction?: Transaction): ReportImages {
   };
 }
 
-export const reportLinkUrl = (token: string) => `${settings().publicBaseUrl}/report/${token}`;
-
 /**
  * Queues the report e-mail of a visit that is being closed, inside the caller's transaction: a new
  * issue (with a fresh link nonce), the PDF as it stands at this close, and the message in the outbox.
  * A second close after a manager returned the visit sends a corrected report and retires the older link.
  */
-export async function enqueueVisitReport(visitId: number, transaction: Transaction, actorId: number | null = null): Promise<{ email: Email; issue: ReportIssue; link: string }> {
+export async function enqueueVisitReport(visitId: number, transaction: Transaction, actorId: number | null = null): Promise<{ email: Email; issue: ReportIssue }> {
   const s = settings();
   const visit = (await Visit.findByPk(visitId, { include: visitIncludes, transaction }))!;
   const to = visit.contactEmail ?? visit.press?.site?.customer?.contactEmail ?? null;
@@ -72,12 +100,11 @@ export async function enqueueVisitReport(visitId: number, transaction: Transacti
   const expiresAt = new Date(Math.floor(Date.now() / 1000 + s.linkDays * 86_400) * 1000);
   const nonce = newLinkNonce();
   const issue = await ReportIssue.create({ visitId, issueNumber: previous + 1, nonce, recipient: to, emailId: null, expiresAt, createdBy: actorId }, { transaction });
-  const token = signReportLink(s.linkKey, { visitId, issueNumber: issue.issueNumber, expiresAt: expiresAt.getTime() / 1000 }, nonce);
-  const link = reportLinkUrl(token);
 
   const record = await readVisitRecord(visitId, { companyName: s.companyName, timeZone: s.timeZone, issue, transaction, visit });
   const pdf = await renderReportPdf(record, imagesOf(visitId, transaction));
-  const context = { record, link };
+  // The stored e-mail gets the marker; the outbox signs the link when it sends (see configureReports).
+  const context = { record, link: LINK_MARK };
   const email = await enqueueEmail(
     {
       visitId,
@@ -87,6 +114,7 @@ export async function enqueueVisitReport(visitId: number, transaction: Transacti
       html: reportEmailHtml(context),
       text: reportEmailText(context),
       attachments: [{ filename: reportFileName(record), contentType: 'application/pdf', content: pdf }],
+      link: { kind: 'report', ref: issue.id },
       createdBy: actorId,
     },
     transaction,
@@ -99,7 +127,7 @@ export async function enqueueVisitReport(visitId: number, transaction: Transacti
     { where: { visitId, kind: 'visit_report', status: 'queued', id: { [Op.ne]: email.id } }, transaction },
   );
   await audit({ visitId, actorId, action: 'report_queued', detail: { emailId: email.id, issue: issue.issueNumber, to, replacedUnsent: replaced } }, transaction);
-  return { email, issue, link };
+  return { email, issue };
 }
 
 /** The same answer for every bad link, so a guess learns nothing about any visit. */
@@ -113,6 +141,8 @@ async function resolveLink(token: string, transaction?: Transaction): Promise<Re
   if (!claims) throw refusal();
   const latest = await ReportIssue.findOne({ where: { visitId: claims.visitId }, order: [['issueNumber', 'DESC']], transaction, lock: transaction?.LOCK.UPDATE });
   if (!latest || latest.issueNumber !== claims.issueNumber || !verifyReportLink(settings().linkKey, token, latest.nonce)) throw refusal();
+  // The expiry in the link must be the issue's own: a key holder cannot mint a longer-lived link.
+  if (claims.expiresAt * 1000 !== latest.expiresAt.getTime()) throw refusal();
   const visit = await Visit.findByPk(claims.visitId, { attributes: ['id', 'status'], transaction });
   // A visit returned for correction is not shown until its corrected report is issued.
   if (!visit || !['closed', 'approved'].includes(visit.status)) throw refusal();

@@ -1,30 +1,26 @@
 import { Router, type Request } from 'express';
-import { rateLimit } from 'express-rate-limit';
 import passport from 'passport';
 import { signInSchema, type SessionUser } from '../../../shared/schemas/session';
 import { SESSION_COOKIE } from '../../auth/session';
 import { requireSignIn } from '../../auth/require-role';
 import { AppError } from '../../lib/errors';
-import { validate } from '../../lib/validate';
+import { valid, validate } from '../../lib/validate';
+import type { signInThrottle } from './sign-in-throttle';
 
-export function sessionRoutes(opts: { signInLimit: number; signInWindowMs: number }): Router {
+type SignInThrottle = ReturnType<typeof signInThrottle>;
+
+export function sessionRoutes(throttle: SignInThrottle): Router {
   const router = Router();
 
-  // Counts failed sign-ins only, per client address, so a technician who typed well is never held back.
-  const signInLimiter = rateLimit({
-    windowMs: opts.signInWindowMs,
-    limit: opts.signInLimit,
-    skipSuccessfulRequests: true,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    handler: (_req, _res, next) => {
-      const minutes = Math.ceil(opts.signInWindowMs / 60_000);
-      next(new AppError(429, 'too_many_attempts', `Too many failed sign-ins from this device. Wait ${minutes} minutes, or ask your administrator to reset your password.`));
-    },
-  });
-
-  router.post('/', signInLimiter, validate('body', signInSchema), async (req, res) => {
-    const user = await authenticate(req);
+  // Only failures count, per account and per client address separately (sign-in-throttle.ts).
+  router.post('/', validate('body', signInSchema), async (req, res) => {
+    const { email } = valid(req, 'body', signInSchema);
+    await throttle.check(email, req.ip);
+    const user = await authenticate(req).catch(async (err: unknown) => {
+      if (err instanceof AppError && err.code === 'bad_credentials') await throttle.recordFailure(email, req.ip);
+      throw err;
+    });
+    await throttle.recordSuccess(email);
     // passport (0.6+) regenerates the session id here, so a planted id is useless after sign-in.
     await new Promise<void>((resolve, reject) => req.login(user, (err) => (err ? reject(err as Error) : resolve())));
     res.json({ user });

@@ -9,6 +9,7 @@ import { audit } from '../audit/audit';
 import { loadVisitForWrite } from './visit-access';
 import { bandValues, currentReadings, findStep, loadVisitContext, type VisitContext } from './visit-context';
 import { readingDto } from './visit-dto';
+import { SavedMeanwhile, saveOnce } from './save-once';
 import { toReadingInput } from './visit-state';
 import { Reading } from './visit-work.model';
 import { detailById, getVisitDetail } from './visits.service';
@@ -42,15 +43,22 @@ export async function rejudgeVisitReadings(ctx: VisitContext, transaction: Trans
  * same id returns the stored reading; a new value for the same winding and place supersedes the old.
  */
 export async function saveReading(user: SessionUser, visitId: number, input: ReadingSaveInput) {
-  const existing = await Reading.findByPk(input.id);
-  if (existing) {
+  const stored = async () => {
+    const existing = await Reading.findByPk(input.id);
+    if (!existing) return null;
     if (existing.visitId !== visitId) throw new AppError(409, 'id_reused', 'That save id belongs to another reading. Reload the visit.');
     return { reading: readingDto(existing), visit: await getVisitDetail(user, visitId) };
-  }
+  };
+  return saveOnce(stored, () => storeReading(user, visitId, input));
+}
+
+async function storeReading(user: SessionUser, visitId: number, input: ReadingSaveInput) {
   const parsed = parseEntry(input.entered, input.quantity);
   if (!parsed.ok) throw new AppError(400, 'invalid_input', 'Some fields need attention.', { entered: parsed.error });
   return Visit.sequelize!.transaction(async (transaction) => {
     const visit = await loadVisitForWrite(user, visitId, transaction);
+    // A retry that waited for the row lock behind its first try finds that try's reading now.
+    if (await Reading.findByPk(input.id, { transaction })) throw new SavedMeanwhile();
     const ctx = await loadVisitContext(visit, transaction);
     const step = findStep(ctx, input.stepId);
     if (step.kind !== 'measure') throw new AppError(400, 'invalid_input', `Step "${step.id}" takes no readings.`);

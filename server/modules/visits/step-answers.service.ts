@@ -1,6 +1,7 @@
 import type { Transaction } from 'sequelize';
 import { evaluateFirmware } from '../../../shared/domain/firmware-compatibility';
 import { judgeMeasurements } from '../../../shared/domain/judge-measurements';
+import { FIRMWARE_UNREADABLE, FIRMWARE_VERSION_HINT, isFirmwareVersionAnswer } from '../../../shared/schemas/firmware-version';
 import type { Step } from '../../../shared/schemas/procedure';
 import type { SessionUser } from '../../../shared/schemas/session';
 import type { StepAnswerInput } from '../../../shared/schemas/visit';
@@ -9,6 +10,7 @@ import { audit } from '../audit/audit';
 import { loadVisitForWrite } from './visit-access';
 import { bandValues, findStep, latestPublishedBandSet, loadVisitContext, type VisitContext } from './visit-context';
 import { missingReadings, stepReadings, toReadingInput, traverse } from './visit-state';
+import { SavedMeanwhile, saveOnce } from './save-once';
 import { StepResult } from './visit-work.model';
 import { rejudgeVisitReadings } from './readings.service';
 import { detailById, getVisitDetail } from './visits.service';
@@ -39,8 +41,16 @@ async function pinGeneration(ctx: VisitContext, generation: string, transaction:
 /** Works out the outcome the server stands behind for one step, from the answer and the record. */
 async function decideOutcome(ctx: VisitContext, step: Step, input: StepAnswerInput, transaction: Transaction): Promise<{ outcome: string; confirmedAt: Date | null; detail: Record<string, unknown> }> {
   const inputs = input.inputs ?? {};
-  for (const spec of step.inputs ?? []) {
-    if (spec.required && !inputs[spec.key]) throw invalid(`inputs.${spec.key}`, `${spec.label} is required.`);
+  const declared = step.inputs ?? [];
+  const unknown = Object.keys(inputs).filter((key) => !declared.some((spec) => spec.key === key));
+  if (unknown.length > 0) {
+    const takes = declared.length ? `It takes ${declared.map((spec) => spec.key).join(', ')}.` : 'It takes no inputs.';
+    throw new AppError(400, 'invalid_input', `Step "${step.id}" has no input named ${unknown.map((key) => `"${key}"`).join(', ')}. ${takes}`, Object.fromEntries(unknown.map((key) => [`inputs.${key}`, 'This step has no such input'])));
+  }
+  for (const spec of declared) {
+    const value = inputs[spec.key];
+    if (spec.required && !value) throw invalid(`inputs.${spec.key}`, `${spec.label} is required.`);
+    if (value && spec.type === 'version' && !isFirmwareVersionAnswer(value)) throw invalid(`inputs.${spec.key}`, `${spec.label}: ${FIRMWARE_VERSION_HINT}`);
   }
   if (inputs.sensor_generation) await pinGeneration(ctx, inputs.sensor_generation, transaction);
 
@@ -57,8 +67,10 @@ async function decideOutcome(ctx: VisitContext, step: Step, input: StepAnswerInp
       const mm = inputs.monitor_module_version;
       if (!pc || !mm) throw invalid('inputs', 'Type both firmware versions.');
       const evaluation = evaluateFirmware(pc, mm, ctx.rules);
+      // The visit's "as found" versions stay empty for a display nobody could read; the answer records why.
+      const readable = (v: string) => (v === FIRMWARE_UNREADABLE ? null : v);
       await ctx.visit.update(
-        { controlFirmwareFound: ctx.visit.controlFirmwareFound ?? pc, monitorFirmwareFound: ctx.visit.monitorFirmwareFound ?? mm },
+        { controlFirmwareFound: ctx.visit.controlFirmwareFound ?? readable(pc), monitorFirmwareFound: ctx.visit.monitorFirmwareFound ?? readable(mm) },
         { transaction },
       );
       return { outcome: evaluation.outcome, confirmedAt: null, detail: { reason: evaluation.reason, matchedRules: evaluation.matchedRules.map((r) => r.key) } };
@@ -89,14 +101,21 @@ async function decideOutcome(ctx: VisitContext, step: Step, input: StepAnswerInp
  * already answered supersedes the old one (kept as history), and the branching is re-run.
  */
 export async function answerStep(user: SessionUser, visitId: number, stepId: string, input: StepAnswerInput) {
-  const existing = await StepResult.findByPk(input.id);
-  if (existing) {
+  const stored = async () => {
+    const existing = await StepResult.findByPk(input.id);
+    if (!existing) return null;
     if (existing.visitId !== visitId || existing.stepId !== stepId) throw new AppError(409, 'id_reused', 'That save id belongs to another answer. Reload the visit.');
     // A retry gets its stored answer back, even after the visit has closed.
     return getVisitDetail(user, visitId);
-  }
+  };
+  return saveOnce(stored, () => storeAnswer(user, visitId, stepId, input));
+}
+
+async function storeAnswer(user: SessionUser, visitId: number, stepId: string, input: StepAnswerInput) {
   return Visit.sequelize!.transaction(async (transaction) => {
     const visit = await loadVisitForWrite(user, visitId, transaction);
+    // A retry that waited for the row lock behind its first try finds that try's answer now.
+    if (await StepResult.findByPk(input.id, { transaction })) throw new SavedMeanwhile();
     const ctx = await loadVisitContext(visit, transaction);
     const step = findStep(ctx, stepId);
     assertReachable(ctx, stepId);

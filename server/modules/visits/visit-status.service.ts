@@ -1,8 +1,9 @@
+import { DatabaseError, UniqueConstraintError, type Transaction } from 'sequelize';
 import type { SessionUser } from '../../../shared/schemas/session';
 import type { CloseOutInput } from '../../../shared/schemas/visit';
 import { AppError } from '../../lib/errors';
 import { audit } from '../audit/audit';
-import { storeSignature } from '../attachments/attachments.service';
+import { prepareSignature } from '../attachments/attachments.service';
 import { enqueueVisitReport } from '../reports/reports.service';
 import { loadVisitForRead, loadVisitForWrite, visitReference } from './visit-access';
 import { loadVisitContext } from './visit-context';
@@ -11,80 +12,134 @@ import { PartUsed } from './visit-work.model';
 import { getVisitDetail } from './visits.service';
 import { Visit } from './visits.model';
 
+/** The status trigger refused a change another request made first (a fallback: the row lock comes first). */
+function isStatusRace(err: unknown): boolean {
+  if (!(err instanceof DatabaseError)) return false;
+  const original = err.original as { code?: string; message?: string } | undefined;
+  return original?.code === '23514' && /visit status cannot change/.test(original.message ?? '');
+}
+
+const decidedMeanwhile = (visitId: number) =>
+  new AppError(409, 'visit_changed', `Visit ${visitReference(visitId)} was changed by someone else just now. Reload it to see where it stands.`);
+
+/** Runs a status change in one transaction; a race the trigger caught answers 409, not 500. */
+async function changeStatus<T>(visitId: number, work: (transaction: Transaction) => Promise<T>): Promise<T> {
+  try {
+    return await Visit.sequelize!.transaction(work);
+  } catch (err) {
+    if (isStatusRace(err)) throw decidedMeanwhile(visitId);
+    throw err;
+  }
+}
+
+/** Parts already stored under the request's ids: a retried close-out's (kept), or another visit's (409). */
+async function partsAlreadyStored(visitId: number, parts: CloseOutInput['parts'], transaction: Transaction): Promise<Set<string>> {
+  if (parts.length === 0) return new Set();
+  const found = await PartUsed.findAll({ where: { id: parts.map((p) => p.id) }, transaction });
+  const elsewhere = found.find((p) => p.visitId !== visitId);
+  if (elsewhere) throw partIdInUse(elsewhere.id);
+  return new Set(found.map((p) => p.id));
+}
+
+const partIdInUse = (id: string) =>
+  new AppError(409, 'id_in_use', `The part id ${id} already belongs to a part on another visit; remove that part row and add it again.`, { parts: 'A part id is already in use' });
+
 /**
  * Closes a visit: the procedure must have reached a finding, the post-repair checks must be
  * confirmed and the customer's contact must have signed. The visit then waits for review.
+ * The signature, the parts and the status change are one transaction on the locked visit row:
+ * of two closes at once, the second waits, sees the visit closed and answers 409, leaving nothing.
  */
 export async function closeVisit(user: SessionUser, visitId: number, input: CloseOutInput) {
-  const visit = await loadVisitForWrite(user, visitId);
-  if (visit.status !== 'in_progress') throw new AppError(409, 'visit_not_open', `Visit ${visitReference(visit.id)} must be in progress to close.`);
-  const ctx = await loadVisitContext(visit);
-  const traversal = traverse(ctx);
-  if (traversal.findings.length === 0) {
-    const at = traversal.current ? ` It is waiting at "${traversal.current.title}".` : '';
-    throw new AppError(409, 'no_finding', `Work the procedure through to a finding before closing.${at}`);
-  }
-  const png = Buffer.from(input.signaturePng.slice(input.signaturePng.indexOf(',') + 1), 'base64');
-  const signature = await storeSignature(user, visitId, png);
+  const early = await loadVisitForWrite(user, visitId);
+  if (early.status !== 'in_progress') throw notInProgress(visitId);
+  // Checked and re-encoded before the row is locked; written only inside the transaction.
+  const signature = await prepareSignature(Buffer.from(input.signaturePng.slice(input.signaturePng.indexOf(',') + 1), 'base64'));
   const now = new Date();
 
-  await Visit.sequelize!.transaction(async (transaction) => {
-    const locked = await loadVisitForWrite(user, visitId, transaction);
-    for (const part of input.parts) {
-      const known = await PartUsed.findByPk(part.id, { transaction });
-      if (known) continue; // a retried close-out
-      await PartUsed.create(
-        { id: part.id, visitId, partNumber: part.partNumber, description: part.description, quantity: part.quantity, serialRemoved: part.serialRemoved ?? null, serialFitted: part.serialFitted ?? null },
+  try {
+    await changeStatus(visitId, async (transaction) => {
+      const locked = await loadVisitForWrite(user, visitId, transaction);
+      if (locked.status !== 'in_progress') throw notInProgress(visitId);
+      const traversal = traverse(await loadVisitContext(locked, transaction));
+      if (traversal.findings.length === 0) {
+        const at = traversal.current ? ` It is waiting at "${traversal.current.title}".` : '';
+        throw new AppError(409, 'no_finding', `Work the procedure through to a finding before closing.${at}`);
+      }
+      const stored = await signature.store(user, visitId, transaction);
+      const known = await partsAlreadyStored(visitId, input.parts, transaction);
+      for (const part of input.parts) {
+        if (known.has(part.id)) continue; // stored by an earlier close-out of this visit
+        await PartUsed.create(
+          { id: part.id, visitId, partNumber: part.partNumber, description: part.description, quantity: part.quantity, serialRemoved: part.serialRemoved ?? null, serialFitted: part.serialFitted ?? null },
+          { transaction },
+        );
+      }
+      await locked.update(
+        {
+          status: 'closed',
+          closedAt: now,
+          signedAt: now,
+          causeCategory: input.causeCategory,
+          actionsTaken: input.actionsTaken,
+          recommendations: input.recommendations ?? null,
+          labourMinutes: input.labourMinutes,
+          travelMinutes: input.travelMinutes,
+          controlFirmwareLeft: input.controlFirmwareLeft ?? locked.controlFirmwareFound,
+          monitorFirmwareLeft: input.monitorFirmwareLeft ?? locked.monitorFirmwareFound,
+          returnToService: input.returnToService,
+          contactName: input.contactName,
+          contactEmail: input.contactEmail,
+        },
         { transaction },
       );
+      await audit(
+        { visitId, actorId: user.id, action: 'visit_closed', detail: { finding: traversal.findings[0]!.id, causeCategory: input.causeCategory, signatureAttachmentId: stored.id } },
+        transaction,
+      );
+      // The report e-mail is queued with the close itself: committed together, or not at all.
+      await enqueueVisitReport(visitId, transaction, user.id);
+    });
+  } catch (err) {
+    await signature.discard();
+    // Two visits closing at once with the same part id: the second insert meets the first's row.
+    if (err instanceof UniqueConstraintError) {
+      const part = input.parts.find((p) => err.errors.some((e) => e.value === p.id));
+      if (part) throw partIdInUse(part.id);
     }
-    await locked.update(
-      {
-        status: 'closed',
-        closedAt: now,
-        signedAt: now,
-        causeCategory: input.causeCategory,
-        actionsTaken: input.actionsTaken,
-        recommendations: input.recommendations ?? null,
-        labourMinutes: input.labourMinutes,
-        travelMinutes: input.travelMinutes,
-        controlFirmwareLeft: input.controlFirmwareLeft ?? locked.controlFirmwareFound,
-        monitorFirmwareLeft: input.monitorFirmwareLeft ?? locked.monitorFirmwareFound,
-        returnToService: input.returnToService,
-        contactName: input.contactName,
-        contactEmail: input.contactEmail,
-      },
-      { transaction },
-    );
-    await audit(
-      { visitId, actorId: user.id, action: 'visit_closed', detail: { finding: traversal.findings[0]!.id, causeCategory: input.causeCategory, signatureAttachmentId: signature.id } },
-      transaction,
-    );
-    // The report e-mail is queued with the close itself: committed together, or not at all.
-    await enqueueVisitReport(visitId, transaction, user.id);
-  });
+    throw err;
+  }
   return getVisitDetail(user, visitId);
 }
 
+const notInProgress = (visitId: number) => new AppError(409, 'visit_not_open', `Visit ${visitReference(visitId)} must be in progress to close.`);
+
 /** A returned visit goes back to work: only its own technician (or the office) reopens it. */
 export async function reopenVisit(user: SessionUser, visitId: number) {
-  const visit = await loadVisitForRead(user, visitId);
-  if (visit.status !== 'returned') throw new AppError(409, 'not_returned', `Visit ${visitReference(visitId)} is ${visit.status}; only a returned visit can be reopened.`);
-  await Visit.sequelize!.transaction(async (transaction) => {
+  await changeStatus(visitId, async (transaction) => {
+    // Locked, so a reopen and a second reopen (or a review) cannot both pass the check below.
+    const visit = await loadVisitForRead(user, visitId, transaction);
+    if (visit.status !== 'returned') throw new AppError(409, 'not_returned', `Visit ${visitReference(visitId)} is ${visit.status}; only a returned visit can be reopened.`);
     await visit.update({ status: 'in_progress', closedAt: null }, { transaction });
     await audit({ visitId, actorId: user.id, action: 'visit_reopened', detail: { reviewComment: visit.reviewComment } }, transaction);
   });
   return getVisitDetail(user, visitId);
 }
 
+const notClosed = (visitId: number, status: string) =>
+  new AppError(409, 'not_closed', `Visit ${visitReference(visitId)} is ${status}; only a closed visit waits for review.`);
+
 /** The service manager's decision on a closed visit: approve it, or return it with a comment. */
 export async function reviewVisit(user: SessionUser, visitId: number, decision: { decision: 'approve' | 'return'; comment?: string }) {
-  const visit = await loadVisitForRead(user, visitId);
-  if (visit.status !== 'closed') throw new AppError(409, 'not_closed', `Visit ${visitReference(visitId)} is ${visit.status}; only a closed visit waits for review.`);
+  const early = await loadVisitForRead(user, visitId);
+  if (early.status !== 'closed') throw notClosed(visitId, early.status);
   if (decision.decision === 'return' && !decision.comment) {
     throw new AppError(400, 'invalid_input', 'Some fields need attention.', { comment: 'Say what the technician should correct.' });
   }
-  await Visit.sequelize!.transaction(async (transaction) => {
+  await changeStatus(visitId, async (transaction) => {
+    // Locked: of an approve and a return at once, the second sees the first's decision and answers 409.
+    const visit = await loadVisitForRead(user, visitId, transaction);
+    if (visit.status !== 'closed') throw notClosed(visitId, visit.status);
     await visit.update(
       decision.decision === 'approve' ? { status: 'approved' } : { status: 'returned', reviewComment: decision.comment ?? null },
       { transaction },

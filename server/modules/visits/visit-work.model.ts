@@ -49,15 +49,6 @@ export class PartUsed extends Model<InferAttributes<PartUsed>, InferCreationAttr
   declare createdAt: CreationOptional<Date>;
 }
 
-export class AuditEvent extends Model<InferAttributes<AuditEvent>, InferCreationAttributes<AuditEvent>> {
-  declare id: CreationOptional<number>;
-  declare visitId: number | null;
-  declare actorId: number | null;
-  declare action: string;
-  declare detail: Record<string, unknown>;
-  declare createdAt: CreationOptional<Date>;
-}
-
 const noUpdatedAt = { timestamps: true, updatedAt: false } as const;
 
 export function initVisitWorkModels(sequelize: Sequelize): void {
@@ -112,16 +103,5 @@ export function initVisitWorkModels(sequelize: Sequelize): void {
       createdAt: DataTypes.DATE,
     },
     { sequelize, tableName: 'parts_used', ...noUpdatedAt },
-  );
-  AuditEvent.init(
-    {
-      id: { type: DataTypes.BIGINT, autoIncrement: true, primaryKey: true },
-      visitId: { type: DataTypes.INTEGER, allowNull: true },
-      actorId: { type: DataTypes.INTEGER, allowNull: true },
-      action: { type: DataTypes.TEXT, allowNull: false },
-      detail: { type: DataTypes.JSONB, allowNull: false },
-      createdAt: DataTypes.DATE,
-    },
-    { sequelize, tableName: 'audit_events', ...noUpdatedAt },
   );
 }

@@ -2,7 +2,7 @@ import { Link } from 'react-router-dom';
 import { ROLE_LABELS } from '@shared/schemas/roles';
 import type { SessionUser } from '@shared/schemas/session';
 import { Button } from '@/components/ui/button';
-import { useSignOut } from '@/features/session/api/use-sign-out';
+import { useSignOut } from '@/api/session';
 import { errorMessage } from '@/lib/api-error';
 import { PRODUCT_NAME } from '@/lib/use-document-title';
 import { ROLE_HOME } from '../access';

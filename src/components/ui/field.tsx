@@ -1,5 +1,8 @@
 import type { ReactElement, ReactNode } from 'react';
 import { cloneElement, useId } from 'react';
+import { FieldError } from './field-error';
+import { Hint } from './hint';
+import { Label } from './label';
 
 interface FieldControlProps {
   id?: string;
@@ -12,36 +15,28 @@ interface FieldProps {
   /** A one-line hint shown under the label, read out with the control. */
   hint?: ReactNode;
   error?: string;
+  /** Classes for the wrapper, e.g. to place it in a grid. */
+  className?: string;
   children: ReactElement<FieldControlProps>;
 }
 
-/** A visible label, optional hint and error text wired to one form control. */
-export function Field({ label, hint, error, children }: FieldProps) {
+/**
+ * A visible label, optional hint and error text wired to one form control: the control gets the
+ * id, aria-invalid when there is an error, and aria-describedby naming the hint and the error.
+ */
+export function Field({ label, hint, error, className, children }: FieldProps) {
   const id = useId();
-  const controlId = `${id}-control`;
+  const controlId = children.props.id ?? `${id}-control`;
   const hintId = hint ? `${id}-hint` : undefined;
   const errorId = error ? `${id}-error` : undefined;
-  const describedBy = [hintId, errorId].filter(Boolean).join(' ') || undefined;
+  const describedBy = [children.props['aria-describedby'], hintId, errorId].filter(Boolean).join(' ') || undefined;
 
   return (
-    <div className="space-y-1.5">
-      <label htmlFor={controlId} className="block text-lg font-semibold text-ink">
-        {label}
-      </label>
-      {hint && (
-        <p id={hintId} className="text-base text-ink-muted">
-          {hint}
-        </p>
-      )}
+    <div className={className ?? 'space-y-1.5'}>
+      <Label htmlFor={controlId}>{label}</Label>
+      {hint && <Hint id={hintId}>{hint}</Hint>}
       {cloneElement(children, { id: controlId, 'aria-invalid': error ? true : undefined, 'aria-describedby': describedBy })}
-      {error && (
-        <p id={errorId} role="alert" className="flex items-start gap-2 text-base font-medium text-verdict-out_of_band">
-          <span aria-hidden="true" className="font-bold">
-            ✕
-          </span>
-          {error}
-        </p>
-      )}
+      <FieldError id={errorId} message={error} />
     </div>
   );
 }

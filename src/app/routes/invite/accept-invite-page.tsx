@@ -4,7 +4,7 @@ import { Link, useParams } from 'react-router-dom';
 import { Banner } from '@/components/ui/banner';
 import { buttonVariants } from '@/components/ui/button';
 import { Spinner } from '@/components/ui/spinner';
-import { invitePreviewOptions } from '@/features/admin-users/api/invite-queries';
+import { invitePreviewOptions } from '@/api/admin-users';
 import { AcceptInviteForm } from '@/features/admin-users/components/accept-invite-form';
 import { errorMessage } from '@/lib/api-error';
 import { PRODUCT_NAME, useDocumentTitle } from '@/lib/use-document-title';

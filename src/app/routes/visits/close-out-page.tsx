@@ -3,8 +3,8 @@ import { Link, useNavigate, useParams } from 'react-router-dom';
 import { Banner } from '@/components/ui/banner';
 import { LoadError } from '@/components/ui/load-error';
 import { Spinner } from '@/components/ui/spinner';
-import { customerContactOptions } from '@/features/close-out/api/customer-contact-query';
-import { visitDetailOptions } from '@/features/close-out/api/visit-detail-query';
+import { customerDetailOptions } from '@/api/customers';
+import { visitDetailOptions } from '@/api/visits';
 import { CloseOutBlocked } from '@/features/close-out/components/close-out-blocked';
 import { CloseOutForm } from '@/features/close-out/components/close-out-form';
 import { CloseOutHeader } from '@/features/close-out/components/close-out-header';
@@ -22,7 +22,12 @@ export function CloseOutPage() {
   useDocumentTitle(visit.data ? `Close out ${visit.data.reference}` : 'Close out');
   const blocker = visit.data ? closeOutBlocker(visit.data) : null;
   const customerId = visit.data?.press?.customerId;
-  const contact = useQuery({ ...customerContactOptions(customerId ?? 0), enabled: customerId !== undefined && visit.data !== undefined && !blocker });
+  const contact = useQuery({
+    ...customerDetailOptions(customerId ?? 0),
+    // A missing contact only means typing it; asking again would keep the form waiting.
+    retry: false,
+    enabled: customerId !== undefined && visit.data !== undefined && !blocker,
+  });
 
   if (!validId) {
     return (

@@ -5,7 +5,7 @@ import { buttonVariants } from '@/components/ui/button';
 import { LoadError } from '@/components/ui/load-error';
 import { PageHeader } from '@/components/ui/page-header';
 import { Spinner } from '@/components/ui/spinner';
-import { visitListOptions } from '@/features/visits/api/visit-queries';
+import { visitListOptions } from '@/api/visits';
 import { ReturnedVisitNote } from '@/features/visits/components/returned-visit-note';
 import { VisitCard } from '@/features/visits/components/visit-card';
 import { useDocumentTitle } from '@/lib/use-document-title';

@@ -3,7 +3,7 @@ import { useNavigate, useSearchParams } from 'react-router-dom';
 import { LoadError } from '@/components/ui/load-error';
 import { PageHeader } from '@/components/ui/page-header';
 import { Spinner } from '@/components/ui/spinner';
-import { pressDetailOptions } from '@/features/visits/api/press-lookup-queries';
+import { pressDetailOptions } from '@/api/presses';
 import { StartVisitForm } from '@/features/visits/components/start/start-visit-form';
 import { useDocumentTitle } from '@/lib/use-document-title';
 

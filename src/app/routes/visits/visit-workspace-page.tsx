@@ -8,7 +8,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { Spinner } from '@/components/ui/spinner';
 import { PhotoPanel } from '@/features/photos/components/photo-panel';
 import { useSessionUser } from '@/features/session/hooks/use-session-user';
-import { visitDetailOptions } from '@/features/visits/api/visit-queries';
+import { visitDetailOptions } from '@/api/visits';
 import { LikelyCauses } from '@/features/visits/components/likely-causes';
 import { ReturnedVisitNote } from '@/features/visits/components/returned-visit-note';
 import { StepList } from '@/features/visits/components/step-list';

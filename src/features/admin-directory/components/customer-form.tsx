@@ -4,9 +4,9 @@ import type { z } from 'zod';
 import { customerInputSchema, type Customer, type CustomerInput } from '@shared/schemas/customer';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
-import { useSaveRecord } from '../api/directory-queries';
+import { useSaveRecord } from '@/api/directory';
 import { RecordForm } from './record-form';
-import { applyServerFieldErrors } from './server-field-errors';
+import { applyServerErrors } from '@/lib/apply-server-errors';
 
 type Fields = z.input<typeof customerInputSchema>;
 const NAMES = ['name', 'contactName', 'contactEmail', 'contactPhone', 'notes'] as const;
@@ -28,7 +28,7 @@ export function CustomerForm({ customer, onDone }: { customer: Customer | null; 
       await save.mutateAsync({ id: customer?.id ?? null, values });
       onDone();
     } catch (error) {
-      applyServerFieldErrors(error, setError, NAMES);
+      applyServerErrors({ setError }, error, NAMES);
     }
   });
   return (

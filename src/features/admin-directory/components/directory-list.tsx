@@ -6,12 +6,12 @@ import { LoadError } from '@/components/ui/load-error';
 import { Pager } from '@/components/ui/pager';
 import { SearchBox } from '@/components/ui/search-box';
 import { Spinner } from '@/components/ui/spinner';
-import { directoryListOptions, type Resource } from '../api/directory-queries';
+import { directoryListOptions, type DirectoryResource } from '@/api/directory';
 
 const PAGE_SIZE = 20;
 
 interface DirectoryListProps<T> {
-  resource: Resource;
+  resource: DirectoryResource;
   noun: string;
   describe: (item: T) => { title: string; detail: string };
   onEdit: (item: T) => void;

@@ -5,10 +5,10 @@ import type { z } from 'zod';
 import { pressInputSchema, type Press, type PressInput } from '@shared/schemas/press';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
-import { directoryListOptions, useSaveRecord } from '../api/directory-queries';
+import { directoryListOptions, useSaveRecord } from '@/api/directory';
 import { RecordForm } from './record-form';
-import { SelectInput } from './select-input';
-import { applyServerFieldErrors } from './server-field-errors';
+import { Select } from '@/components/ui/select';
+import { applyServerErrors } from '@/lib/apply-server-errors';
 
 type Fields = z.input<typeof pressInputSchema>;
 const NAMES = ['siteId', 'assetTag', 'model', 'tonnage', 'controlModel', 'sensorGeneration', 'controlFirmware', 'monitorFirmware', 'notes'] as const;
@@ -35,7 +35,7 @@ export function PressForm({ press, onDone }: { press: Press | null; onDone: () =
       await save.mutateAsync({ id: press?.id ?? null, values });
       onDone();
     } catch (error) {
-      applyServerFieldErrors(error, setError, NAMES);
+      applyServerErrors({ setError }, error, NAMES);
     }
   });
   const text = (name: (typeof NAMES)[number], label: string, hint?: string) => (
@@ -46,7 +46,7 @@ export function PressForm({ press, onDone }: { press: Press | null; onDone: () =
   return (
     <RecordForm title={press ? `Edit press ${press.assetTag}` : 'Add a press'} onSubmit={() => void onSubmit()} onCancel={onDone} busy={save.isPending} error={save.error}>
       <Field label="Site" error={errors.siteId?.message} hint={sites.isPending ? 'Loading sites…' : undefined}>
-        <SelectInput {...register('siteId')}>
+        <Select {...register('siteId')}>
           <option value="">Pick the site</option>
           {sites.data?.items.map((s) => (
             <option key={s.id} value={s.id}>
@@ -54,7 +54,7 @@ export function PressForm({ press, onDone }: { press: Press | null; onDone: () =
               {s.customerName ? ` — ${s.customerName}` : ''}
             </option>
           ))}
-        </SelectInput>
+        </Select>
       </Field>
       <div className="grid gap-4 md:grid-cols-3">
         {text('assetTag', 'Asset tag', 'As painted or labelled on the press')}

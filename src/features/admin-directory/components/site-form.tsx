@@ -5,10 +5,10 @@ import type { z } from 'zod';
 import { siteInputSchema, type Site, type SiteInput } from '@shared/schemas/site';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
-import { directoryListOptions, useSaveRecord } from '../api/directory-queries';
+import { directoryListOptions, useSaveRecord } from '@/api/directory';
 import { RecordForm } from './record-form';
-import { SelectInput } from './select-input';
-import { applyServerFieldErrors } from './server-field-errors';
+import { Select } from '@/components/ui/select';
+import { applyServerErrors } from '@/lib/apply-server-errors';
 
 type Fields = z.input<typeof siteInputSchema>;
 const NAMES = ['customerId', 'name', 'address', 'city'] as const;
@@ -25,20 +25,20 @@ export function SiteForm({ site, onDone }: { site: Site | null; onDone: () => vo
       await save.mutateAsync({ id: site?.id ?? null, values });
       onDone();
     } catch (error) {
-      applyServerFieldErrors(error, setError, NAMES);
+      applyServerErrors({ setError }, error, NAMES);
     }
   });
   return (
     <RecordForm title={site ? `Edit ${site.name}` : 'Add a site'} onSubmit={() => void onSubmit()} onCancel={onDone} busy={save.isPending} error={save.error}>
       <Field label="Customer" error={errors.customerId?.message} hint={customers.isPending ? 'Loading customers…' : undefined}>
-        <SelectInput {...register('customerId')}>
+        <Select {...register('customerId')}>
           <option value="">Pick the customer</option>
           {customers.data?.items.map((c) => (
             <option key={c.id} value={c.id}>
               {c.name}
             </option>
           ))}
-        </SelectInput>
+        </Select>
       </Field>
       <Field label="Site name" error={errors.name?.message}>
         <TextInput {...register('name')} />

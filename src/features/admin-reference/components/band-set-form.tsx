@@ -8,7 +8,7 @@ import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
 import { errorMessage, isApiError } from '@/lib/api-error';
-import { useSaveBandSetDraft } from '../api/band-set-queries';
+import { bandSetsApi } from '@/api/band-sets';
 import { FORM_MESSAGES } from '../lib/form-messages';
 import { JudgementPreview } from './judgement-preview';
 import { NumberField } from './number-field';
@@ -28,7 +28,7 @@ interface BandSetFormProps {
 
 /** The values of one band-set version; a draft can be edited and saved, and tried in the preview box. */
 export function BandSetForm({ record, editable }: BandSetFormProps) {
-  const save = useSaveBandSetDraft();
+  const save = bandSetsApi.useSaveDraft();
   const {
     register,
     handleSubmit,
@@ -41,7 +41,7 @@ export function BandSetForm({ record, editable }: BandSetFormProps) {
 
   const onSubmit = handleSubmit(async (bands) => {
     try {
-      const saved = await save.mutateAsync({ id: record.id, bands });
+      const saved = await save.mutateAsync({ id: record.id, body: { bands } });
       reset(saved.bands);
     } catch (error) {
       if (!isApiError(error)) return;

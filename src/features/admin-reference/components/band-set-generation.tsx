@@ -2,16 +2,16 @@ import type { BandSetGeneration as Generation } from '@shared/schemas/admin-refe
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { errorMessage } from '@/lib/api-error';
-import { useDiscardBandSet, useDraftBandSet, usePublishBandSet } from '../api/band-set-queries';
+import { bandSetsApi } from '@/api/band-sets';
 import { BandSetForm } from './band-set-form';
 import { ConfirmButton } from './confirm-button';
 import { VersionList } from './version-list';
 
 /** One sensor generation: its current published values, its draft (if any), and every version. */
 export function BandSetGeneration({ generation }: { generation: Generation }) {
-  const draft = useDraftBandSet();
-  const publish = usePublishBandSet();
-  const discard = useDiscardBandSet();
+  const draft = bandSetsApi.useCreateDraft();
+  const publish = bandSetsApi.usePublish();
+  const discard = bandSetsApi.useDiscard();
   const failed = [draft, publish, discard].find((m) => m.isError);
   const { current } = generation;
 

@@ -3,12 +3,12 @@ import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { LoadError } from '@/components/ui/load-error';
 import { Spinner } from '@/components/ui/spinner';
-import { bandSetListOptions } from '../api/band-set-queries';
+import { bandSetsApi } from '@/api/band-sets';
 import { BandSetGeneration } from './band-set-generation';
 
 /** Pick a sensor generation, then edit its draft or start one from the version in use. */
 export function BandSetWorkspace({ generation, onGenerationChange }: { generation: string | null; onGenerationChange: (g: string) => void }) {
-  const { data, error, isPending, isError, refetch } = useQuery(bandSetListOptions());
+  const { data, error, isPending, isError, refetch } = useQuery(bandSetsApi.listOptions());
   if (isPending) return <Spinner label="Loading band sets…" />;
   if (isError) return <LoadError error={error} what="band sets" onRetry={() => void refetch()} />;
   if (data.length === 0) return <Banner role="status" title="No band sets yet">Band sets come with the reference data seed.</Banner>;

@@ -4,7 +4,7 @@ import { firmwareRulesDraftSchema, type FirmwareRuleSetRecord, type FirmwareRule
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { errorMessage, isApiError } from '@/lib/api-error';
-import { useSaveFirmwareRules } from '../api/firmware-rule-queries';
+import { firmwareRulesApi } from '@/api/firmware-rules';
 import { FORM_MESSAGES } from '../lib/form-messages';
 import { FirmwareRuleRow } from './firmware-rule-row';
 
@@ -12,7 +12,7 @@ const HEADERS = ['Key', 'Press control from', 'Press control before', 'Monitor m
 
 /** The rules of one version as an editable table; version ranges are half-open (from ≤ v < before). */
 export function FirmwareRuleTable({ record, editable }: { record: FirmwareRuleSetRecord; editable: boolean }) {
-  const save = useSaveFirmwareRules();
+  const save = firmwareRulesApi.useSaveDraft();
   const { register, control, handleSubmit, setError, reset, formState: { errors, isDirty } } = useForm<FirmwareRulesDraftInput>({
     resolver: zodResolver(firmwareRulesDraftSchema, FORM_MESSAGES),
     defaultValues: { rules: record.rules },
@@ -21,7 +21,7 @@ export function FirmwareRuleTable({ record, editable }: { record: FirmwareRuleSe
 
   const onSubmit = handleSubmit(async ({ rules }) => {
     try {
-      const saved = await save.mutateAsync({ id: record.id, rules });
+      const saved = await save.mutateAsync({ id: record.id, body: { rules } });
       reset({ rules: saved.rules });
     } catch (error) {
       if (!isApiError(error)) return;

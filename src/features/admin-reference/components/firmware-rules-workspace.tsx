@@ -4,17 +4,17 @@ import { Button } from '@/components/ui/button';
 import { LoadError } from '@/components/ui/load-error';
 import { Spinner } from '@/components/ui/spinner';
 import { errorMessage } from '@/lib/api-error';
-import { firmwareRuleListOptions, useDiscardFirmwareRules, useDraftFirmwareRules, usePublishFirmwareRules } from '../api/firmware-rule-queries';
+import { firmwareRulesApi } from '@/api/firmware-rules';
 import { ConfirmButton } from './confirm-button';
 import { FirmwareRuleTable } from './firmware-rule-table';
 import { VersionList } from './version-list';
 
 /** The firmware compatibility rules: the version in use, a draft to edit, and every version. */
 export function FirmwareRulesWorkspace() {
-  const { data, error, isPending, isError, refetch } = useQuery(firmwareRuleListOptions());
-  const draft = useDraftFirmwareRules();
-  const publish = usePublishFirmwareRules();
-  const discard = useDiscardFirmwareRules();
+  const { data, error, isPending, isError, refetch } = useQuery(firmwareRulesApi.listOptions());
+  const draft = firmwareRulesApi.useCreateDraft();
+  const publish = firmwareRulesApi.usePublish();
+  const discard = firmwareRulesApi.useDiscard();
   if (isPending) return <Spinner label="Loading firmware rules…" />;
   if (isError) return <LoadError error={error} what="firmware rules" onRetry={() => void refetch()} />;
   const failed = [draft, publish, discard].find((m) => m.isError);

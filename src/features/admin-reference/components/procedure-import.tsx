@@ -5,7 +5,7 @@ import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
 import { errorMessage } from '@/lib/api-error';
-import { useCheckProcedure, useImportProcedure } from '../api/procedure-queries';
+import { proceduresApi, useCheckProcedure } from '@/api/procedures';
 import { ProcedureDiagram } from './procedure-diagram';
 import { ProcedureProblems } from './procedure-problems';
 
@@ -34,7 +34,7 @@ export function ProcedureImport({ onImported }: { onImported: (id: number) => vo
   const [jsonError, setJsonError] = useState<string | null>(null);
   const [checkedText, setCheckedText] = useState<string | null>(null);
   const check = useCheckProcedure();
-  const save = useImportProcedure();
+  const save = proceduresApi.useCreateDraft();
   const envelope = procedureImportSchema.pick({ key: true, title: true }).safeParse({ key, title });
   const fieldError = (name: 'key' | 'title') => (envelope.success || !checkedText ? undefined : envelope.error.issues.find((i) => i.path[0] === name)?.message);
   const result: ProcedureCheck | undefined = checkedText === text ? check.data : undefined;

@@ -3,11 +3,11 @@ import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { LoadError } from '@/components/ui/load-error';
 import { Spinner } from '@/components/ui/spinner';
-import { procedureListOptions } from '../api/procedure-queries';
+import { proceduresApi } from '@/api/procedures';
 
 /** Every procedure key with its version in use and its draft, if any. */
 export function ProcedureList({ selectedId, onSelect }: { selectedId: number | null; onSelect: (id: number) => void }) {
-  const { data, error, isPending, isError, refetch } = useQuery(procedureListOptions());
+  const { data, error, isPending, isError, refetch } = useQuery(proceduresApi.listOptions());
   if (isPending) return <Spinner label="Loading procedures…" />;
   if (isError) return <LoadError error={error} what="procedures" onRetry={() => void refetch()} />;
   if (data.length === 0) return <Banner role="status" title="No procedures yet">Import one below.</Banner>;

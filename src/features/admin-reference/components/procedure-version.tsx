@@ -3,15 +3,15 @@ import { Banner } from '@/components/ui/banner';
 import { LoadError } from '@/components/ui/load-error';
 import { Spinner } from '@/components/ui/spinner';
 import { errorMessage } from '@/lib/api-error';
-import { procedureDetailOptions, useDiscardProcedure, usePublishProcedure } from '../api/procedure-queries';
+import { proceduresApi } from '@/api/procedures';
 import { ConfirmButton } from './confirm-button';
 import { ProcedureDiagram } from './procedure-diagram';
 
 /** One stored version: its diagram, and for a draft the publish and discard actions. */
 export function ProcedureVersion({ id, onDiscarded }: { id: number; onDiscarded: () => void }) {
-  const { data, error, isPending, isError, refetch } = useQuery(procedureDetailOptions(id));
-  const publish = usePublishProcedure();
-  const discard = useDiscardProcedure();
+  const { data, error, isPending, isError, refetch } = useQuery(proceduresApi.detailOptions(id));
+  const publish = proceduresApi.usePublish();
+  const discard = proceduresApi.useDiscard();
   if (isPending) return <Spinner label="Loading the procedure…" />;
   if (isError) return <LoadError error={error} what="the procedure" onRetry={() => void refetch()} />;
   const failed = publish.isError ? publish.error : discard.isError ? discard.error : null;

@@ -6,8 +6,9 @@ import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
-import { errorMessage, isApiError } from '@/lib/api-error';
-import { useAcceptInvite } from '../api/invite-queries';
+import { applyServerErrors } from '@/lib/apply-server-errors';
+import { errorMessage } from '@/lib/api-error';
+import { useAcceptInvite } from '@/api/admin-users';
 
 /** Choose a password (twice); on success the account is open and the person signs in. */
 export function AcceptInviteForm({ token, email, onAccepted }: { token: string; email: string; onAccepted: () => void }) {
@@ -23,7 +24,7 @@ export function AcceptInviteForm({ token, email, onAccepted }: { token: string; 
       await accept.mutateAsync(password);
       onAccepted();
     } catch (error) {
-      if (isApiError(error) && error.fields.password) setError('password', { message: error.fields.password });
+      applyServerErrors({ setError }, error, ['password']);
     }
   });
 

@@ -6,8 +6,9 @@ import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
-import { errorMessage, isApiError } from '@/lib/api-error';
-import { useInviteUser } from '../api/user-queries';
+import { applyServerErrors } from '@/lib/apply-server-errors';
+import { errorMessage } from '@/lib/api-error';
+import { useInviteUser } from '@/api/admin-users';
 import { RoleSelect } from './role-select';
 
 type Fields = z.input<typeof userInviteSchema>;
@@ -26,8 +27,7 @@ export function InviteUserForm() {
       await invite.mutateAsync(values);
       reset();
     } catch (error) {
-      if (!isApiError(error)) return;
-      for (const name of NAMES) if (error.fields[name]) setError(name, { message: error.fields[name] });
+      applyServerErrors({ setError }, error, NAMES);
     }
   });
 

@@ -4,7 +4,7 @@ import { Banner } from '@/components/ui/banner';
 import { LoadError } from '@/components/ui/load-error';
 import { Spinner } from '@/components/ui/spinner';
 import { errorMessage } from '@/lib/api-error';
-import { userListOptions } from '../api/user-queries';
+import { userListOptions } from '@/api/admin-users';
 import { UserRow } from './user-row';
 
 /** Every account with its role and status; a deactivated person is signed out everywhere at once. */

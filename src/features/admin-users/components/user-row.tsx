@@ -1,7 +1,7 @@
 import type { AdminUser } from '@shared/schemas/admin-users';
 import type { Role } from '@shared/schemas/roles';
 import { Button } from '@/components/ui/button';
-import { useResendInvite, useUpdateUser } from '../api/user-queries';
+import { useResendInvite, useUpdateUser } from '@/api/admin-users';
 import { RoleSelect } from './role-select';
 
 const STATUS: Record<AdminUser['status'], { label: string; mark: string }> = {

@@ -3,7 +3,7 @@ import type { FindingStep } from '@shared/schemas/procedure';
 import { CAUSE_LABELS } from '@shared/schemas/visit';
 import type { VisitDetail } from '@shared/schemas/visit-detail';
 import type { CloseOutFields } from '../utils/close-out-values';
-import { RadioCards, type RadioCardOption } from './radio-cards';
+import { RadioCards, type RadioCardOption } from '@/components/ui/radio-cards';
 
 /** The finding the procedure reached, from the procedure version this visit pinned. */
 export function reachedFinding(visit: VisitDetail): FindingStep | undefined {

@@ -1,11 +1,11 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { FormProvider, useForm, type FieldPath } from 'react-hook-form';
+import { FormProvider, useForm } from 'react-hook-form';
 import { closeOutSchema, type CloseOutInput } from '@shared/schemas/visit';
 import type { VisitDetail } from '@shared/schemas/visit-detail';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
-import { isApiError } from '@/lib/api-error';
-import { useCloseVisit } from '../api/use-close-visit';
+import { applyServerErrors } from '@/lib/apply-server-errors';
+import { useCloseVisit } from '@/api/visits';
 import { closeOutErrorMap } from '../utils/close-out-error-map';
 import { closeOutDefaults, type CloseOutFields, type CustomerContact } from '../utils/close-out-values';
 import { CauseSection } from './cause-section';
@@ -36,9 +36,7 @@ export function CloseOutForm({ visit, contact, onClosed }: CloseOutFormProps) {
     try {
       onClosed(await close.mutateAsync(values));
     } catch (error) {
-      // The server names fields by their path (returnToService.tdcAgrees): the same names as the form's.
-      if (!isApiError(error)) return;
-      for (const [name, message] of Object.entries(error.fields)) form.setError(name as FieldPath<CloseOutFields>, { message });
+      applyServerErrors(form, error);
     }
   });
 

@@ -3,8 +3,8 @@ import { Field } from '@/components/ui/field';
 import { SafetyNotice } from '@/components/ui/safety-notice';
 import { TextInput } from '@/components/ui/text-input';
 import { emptyAsAbsent, type CloseOutFields } from '../utils/close-out-values';
-import { BigCheckbox } from './big-checkbox';
-import { RadioCards } from './radio-cards';
+import { CheckboxCard } from '@/components/ui/checkbox-card';
+import { RadioCards } from '@/components/ui/radio-cards';
 import { SafetyDistanceNote } from './safety-distance-note';
 
 /** The post-repair checks that must pass before the press goes back to production. */
@@ -28,13 +28,13 @@ export function ReturnToServiceSection() {
         and tags only as the plant’s lockout procedure allows.
       </SafetyNotice>
       <div className="space-y-3">
-        <BigCheckbox label="The fault has cleared on the control" error={rts?.faultCleared?.message} registration={register('returnToService.faultCleared')} />
-        <BigCheckbox
+        <CheckboxCard label="The fault has cleared on the control" error={rts?.faultCleared?.message} registration={register('returnToService.faultCleared')} />
+        <CheckboxCard
           label="The crank-angle display reads top dead centre with the slide at the top of its stroke"
           error={rts?.tdcAgrees?.message}
           registration={register('returnToService.tdcAgrees')}
         />
-        <BigCheckbox
+        <CheckboxCard
           label="The stopping-time / brake-monitor check passed"
           error={rts?.stoppingTimeChecked?.message}
           registration={register('returnToService.stoppingTimeChecked')}

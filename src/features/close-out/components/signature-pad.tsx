@@ -1,6 +1,6 @@
 import { useCallback, useEffect, useId, useRef, type Ref } from 'react';
 import { Button } from '@/components/ui/button';
-import { FieldError } from './field-error';
+import { FieldError } from '@/components/ui/field-error';
 
 interface SignaturePadProps {
   label: string;

@@ -4,7 +4,7 @@ import { Button } from '@/components/ui/button';
 import { LoadError } from '@/components/ui/load-error';
 import { Pager } from '@/components/ui/pager';
 import { Spinner } from '@/components/ui/spinner';
-import { customerListOptions } from '../api/customer-queries';
+import { customerListOptions } from '@/api/customers';
 import { CustomerCard } from './customer-card';
 
 export const CUSTOMER_PAGE_SIZE = 20;

@@ -5,7 +5,7 @@ import { DEFAULT_REPEAT_WINDOW_DAYS } from '@shared/schemas/manager-figures';
 import { LoadError } from '@/components/ui/load-error';
 import { Spinner } from '@/components/ui/spinner';
 import { TextInput } from '@/components/ui/text-input';
-import { figuresOptions } from '../api/figures-queries';
+import { figuresOptions } from '@/api/figures';
 import { CauseMixChart } from './cause-mix-chart';
 import { FigureCards } from './figure-cards';
 import { RepeatVisitsList } from './repeat-visits-list';

@@ -3,7 +3,7 @@ import { Link } from 'react-router-dom';
 import { Banner } from '@/components/ui/banner';
 import { LoadError } from '@/components/ui/load-error';
 import { Spinner } from '@/components/ui/spinner';
-import { pressHistoryOptions } from '../api/figures-queries';
+import { pressHistoryOptions } from '@/api/presses';
 import { PressHistoryChart } from './press-history-chart';
 
 interface PressHistoryProps {

@@ -3,7 +3,7 @@ import userEvent from '@testing-library/user-event';
 import { createAppQueryClient } from '@/app/create-app-query-client';
 import { AppProvider } from '@/app/provider';
 import { apiError, mockApi } from '@/testing/mock-api';
-import type { VisitPhoto } from '../api/photo-queries';
+import type { AttachmentDto } from '@shared/schemas/attachment';
 import { PhotoPanel } from './photo-panel';
 
 // Screens here wait on mocked requests; a busy two-core machine can take over a second.
@@ -16,7 +16,7 @@ afterEach(() => {
 const VISIT_ID = 7;
 const PATH = `/api/visits/${VISIT_ID}/attachments`;
 
-function storedPhoto(id: string, stepId: string | null, caption: string | null): VisitPhoto {
+function storedPhoto(id: string, stepId: string | null, caption: string | null): AttachmentDto {
   return {
     id,
     visitId: VISIT_ID,
@@ -41,7 +41,7 @@ type UploadReply = { status: number; body?: unknown } | 'network down';
  * (a stored photo when none is left). The multipart body is read from the fetch call itself.
  */
 function photosApi(replies: UploadReply[] = []) {
-  const stored: VisitPhoto[] = [];
+  const stored: AttachmentDto[] = [];
   const forms: FormData[] = [];
   const api = mockApi({
     [`GET ${PATH}`]: (call) => ({

@@ -4,7 +4,7 @@ import { Field } from '@/components/ui/field';
 import { LoadError } from '@/components/ui/load-error';
 import { Spinner } from '@/components/ui/spinner';
 import { TextInput } from '@/components/ui/text-input';
-import { photoListOptions } from '../api/photo-queries';
+import { photoListOptions } from '@/api/attachments';
 import { usePhotoUploads } from '../hooks/use-photo-uploads';
 import { PhotoThumbnail } from './photo-thumbnail';
 import { TakePhotoButton } from './take-photo-button';

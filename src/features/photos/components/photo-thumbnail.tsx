@@ -1,11 +1,11 @@
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { errorMessage } from '@/lib/api-error';
-import type { VisitPhoto } from '../api/photo-queries';
-import { useDeletePhoto } from '../api/use-delete-photo';
+import type { AttachmentDto } from '@shared/schemas/attachment';
+import { useDeleteAttachment } from '@/api/attachments';
 
 interface PhotoThumbnailProps {
-  photo: VisitPhoto;
+  photo: AttachmentDto;
   /** "Photo 3": the name of a photo without a caption. */
   fallbackName: string;
   canDelete: boolean;
@@ -14,7 +14,7 @@ interface PhotoThumbnailProps {
 /** One stored photo: the thumbnail opens the full picture; deleting asks first. */
 export function PhotoThumbnail({ photo, fallbackName, canDelete }: PhotoThumbnailProps) {
   const [confirming, setConfirming] = useState(false);
-  const remove = useDeletePhoto(photo.visitId);
+  const remove = useDeleteAttachment(photo.visitId);
   const name = photo.caption ?? fallbackName;
 
   return (

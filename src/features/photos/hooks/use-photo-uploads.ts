@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { isApiError } from '@/lib/api-error';
-import { useUploadPhoto } from '../api/use-upload-photo';
+import { useUploadPhoto } from '@/api/attachments';
 
 export interface PhotoUploadEntry {
   id: string;

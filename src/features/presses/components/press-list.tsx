@@ -4,7 +4,7 @@ import { Button } from '@/components/ui/button';
 import { LoadError } from '@/components/ui/load-error';
 import { Pager } from '@/components/ui/pager';
 import { Spinner } from '@/components/ui/spinner';
-import { pressListOptions } from '../api/press-queries';
+import { pressListOptions } from '@/api/presses';
 import { PressCard } from './press-card';
 
 export const PRESS_PAGE_SIZE = 20;

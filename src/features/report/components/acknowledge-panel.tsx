@@ -8,7 +8,7 @@ import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
 import { errorMessage } from '@/lib/api-error';
-import { useAcknowledgeReport } from '../api/report-queries';
+import { useAcknowledgeReport } from '@/api/report';
 
 const acknowledgeFormSchema = z.object({ name: z.string().trim().max(120, 'Keep the name under 120 characters') });
 type AcknowledgeForm = z.infer<typeof acknowledgeFormSchema>;

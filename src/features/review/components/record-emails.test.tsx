@@ -1,6 +1,7 @@
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { render, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
+import type { EmailDto } from '@shared/schemas/email';
 import { mockApi } from '@/testing/mock-api';
 import { RecordEmails } from './record-emails';
 
@@ -8,16 +9,21 @@ afterEach(() => {
   vi.unstubAllGlobals();
 });
 
-const failedMail = {
+const failedMail: EmailDto = {
   id: 7,
+  visitId: 42,
   kind: 'visit_report',
   to: 'maintenance@plant.example',
   subject: 'Service report V-000042 (invented)',
   status: 'failed',
   attempts: 10,
   lastError: '550 mailbox unavailable',
+  nextAttemptAt: null,
   sentAt: null,
+  messageId: null,
+  attachments: [],
   createdAt: '2026-12-01T10:00:00.000Z',
+  updatedAt: '2026-12-01T12:00:00.000Z',
 };
 
 describe('e-mails on the visit record', () => {
@@ -25,7 +31,7 @@ describe('e-mails on the visit record', () => {
     const api = mockApi({ 'POST /api/emails/7/resend': { status: 200, body: { ...failedMail, status: 'queued' } } });
     render(
       <QueryClientProvider client={new QueryClient()}>
-        <RecordEmails visitId={42} state={{ available: true, items: [failedMail] }} loading={false} failed={false} timeZone="UTC" />
+        <RecordEmails emails={[failedMail]} loading={false} failed={false} timeZone="UTC" />
       </QueryClientProvider>,
     );
     expect(screen.getByText('Last error: 550 mailbox unavailable')).toBeInTheDocument();

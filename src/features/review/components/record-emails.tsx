@@ -2,13 +2,12 @@ import { formatDateTime } from '@shared/format/date-time';
 import { EMAIL_STATUS_LABELS } from '@shared/format/labels';
 import { Button } from '@/components/ui/button';
 import { ApiError } from '@/lib/api-error';
-import type { RecordEmail } from '../api/review-queries';
-import { useResendEmail } from '../api/use-resend-email';
+import type { EmailDto } from '@shared/schemas/email';
+import { useResendEmail } from '@/api/emails';
 import { RecordSection } from './record-section';
 
 interface RecordEmailsProps {
-  visitId: number;
-  state: { available: boolean; items: RecordEmail[] } | undefined;
+  emails: EmailDto[] | undefined;
   loading: boolean;
   failed: boolean;
   /** The record's zone (REPORT_TIME_ZONE), so these times read like the record's. */
@@ -16,17 +15,16 @@ interface RecordEmailsProps {
 }
 
 /** The report e-mails sent for this visit, or a plain note when the outbox cannot be read. */
-export function RecordEmails({ visitId, state, loading, failed, timeZone }: RecordEmailsProps) {
-  const resend = useResendEmail(visitId);
+export function RecordEmails({ emails, loading, failed, timeZone }: RecordEmailsProps) {
+  const resend = useResendEmail();
   let body;
   if (loading) body = <p className="text-lg text-ink-muted">Loading e-mails…</p>;
   else if (failed) body = <p className="text-lg text-ink-muted">The e-mails of this visit could not be loaded just now; the rest of the record is complete.</p>;
-  else if (!state?.available) body = <p className="text-lg text-ink-muted">The e-mail outbox is not available on this server yet, so sent reports cannot be listed here.</p>;
-  else if (state.items.length === 0) body = <p className="text-lg text-ink-muted">No report e-mail has been queued for this visit.</p>;
+  else if (!emails || emails.length === 0) body = <p className="text-lg text-ink-muted">No report e-mail has been queued for this visit.</p>;
   else
     body = (
       <ul className="space-y-2">
-        {state.items.map((mail) => (
+        {emails.map((mail) => (
           <li key={mail.id} className="rounded-lg border border-surface-line p-3 text-lg">
             <p className="font-semibold text-ink">
               {EMAIL_STATUS_LABELS[mail.status] ?? mail.status}: {mail.subject}

@@ -4,7 +4,7 @@ import { Link } from 'react-router-dom';
 import type { VisitStatus } from '@shared/schemas/visit';
 import { Banner } from '@/components/ui/banner';
 import { Button, buttonVariants } from '@/components/ui/button';
-import { reviewQueueOptions } from '../api/review-queries';
+import { reviewQueueOptions } from '@/api/visit-table';
 import { ReviewDecisionDialog, type ReviewMode } from './review-decision-dialog';
 
 /** The few facts of the visit the decision needs. */

@@ -6,9 +6,10 @@ import type { VisitDetail } from '@shared/schemas/visit-detail';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
+import { applyServerErrors } from '@/lib/apply-server-errors';
 import { errorMessage, isApiError } from '@/lib/api-error';
-import { cn } from '@/lib/cn';
-import { useReviewDecision } from '../api/use-review-decision';
+import { Textarea } from '@/components/ui/textarea';
+import { useReviewDecision } from '@/api/visit-review';
 
 export type ReviewMode = 'approve' | 'return';
 
@@ -75,7 +76,7 @@ export function ReviewDecisionDialog({ visitId, reference, mode, onClose, onDone
       {
         onSuccess: onDone,
         onError: (error) => {
-          if (isApiError(error) && error.fields.comment) setError('comment', { message: error.fields.comment });
+          applyServerErrors({ setError }, error, ['comment']);
         },
       },
     );
@@ -90,17 +91,13 @@ export function ReviewDecisionDialog({ visitId, reference, mode, onClose, onDone
         {mode === 'return' && <p className="text-lg text-ink-muted">The technician sees your comment on the visit and can reopen it to correct the record.</p>}
         <form onSubmit={submit} noValidate className="space-y-5">
           <Field label={copy.label} error={formState.errors.comment?.message}>
-            <textarea
+            <Textarea
               {...commentField}
               ref={(el) => {
                 registerRef(el);
                 commentRef.current = el;
               }}
               rows={4}
-              className={cn(
-                'block w-full rounded-lg border-2 border-surface-edge bg-surface-raised px-4 py-3 text-lg text-ink',
-                'focus:border-accent focus:outline-none focus:ring-[3px] focus:ring-accent/40 aria-[invalid=true]:border-verdict-out_of_band',
-              )}
             />
           </Field>
           {decision.isError && !(isApiError(decision.error) && decision.error.fields.comment) && (

@@ -6,7 +6,7 @@ import { Banner } from '@/components/ui/banner';
 import { LoadError } from '@/components/ui/load-error';
 import { Spinner } from '@/components/ui/spinner';
 import { VerdictMark } from '@/components/ui/verdict-mark';
-import { reviewQueueOptions } from '../api/review-queries';
+import { reviewQueueOptions } from '@/api/visit-table';
 import { formatDateTime, waitingFor } from '../lib/format';
 
 /** Closed visits waiting for review, longest-waiting first, with what needs a closer look flagged. */

@@ -4,7 +4,7 @@ import { createAppQueryClient } from '@/app/create-app-query-client';
 import { AppProvider } from '@/app/provider';
 import { apiError, mockApi } from '@/testing/mock-api';
 import { technician } from '@/testing/fixtures';
-import { SESSION_KEY } from '../api/session-queries';
+import { sessionKeys } from '@/api/session';
 import { SignInForm } from './sign-in-form';
 
 function renderForm() {
@@ -72,7 +72,7 @@ describe('SignInForm', () => {
     await user.type(screen.getByLabelText('Password'), 'correct horse');
     await user.click(screen.getByRole('button', { name: 'Sign in' }));
 
-    await waitFor(() => expect(queryClient.getQueryData(SESSION_KEY)).toEqual(technician));
+    await waitFor(() => expect(queryClient.getQueryData(sessionKeys.all)).toEqual(technician));
     expect(api.callsTo('POST', '/api/session')).toHaveLength(1);
     expect(api.callsTo('POST', '/api/session')[0]?.body).toEqual({ email: 'tech@example.test', password: 'correct horse' });
     expect(api.fetchMock.mock.calls[0]?.[1]).toMatchObject({ credentials: 'same-origin', method: 'POST' });
@@ -91,7 +91,7 @@ describe('SignInForm', () => {
     expect(within(alert).getByText(message)).toBeInTheDocument();
     expect(screen.getByRole('button', { name: 'Sign in' })).toBeEnabled();
     // A wrong password is not an ended session: nothing about the session changes.
-    expect(queryClient.getQueryData(SESSION_KEY)).toBeUndefined();
+    expect(queryClient.getQueryData(sessionKeys.all)).toBeUndefined();
   });
 
   it('puts field messages from the server next to their fields', async () => {

@@ -7,8 +7,9 @@ import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
-import { errorMessage, isApiError } from '@/lib/api-error';
-import { useSignIn } from '../api/use-sign-in';
+import { applyServerErrors } from '@/lib/apply-server-errors';
+import { errorMessage } from '@/lib/api-error';
+import { useSignIn } from '@/api/session';
 
 type SignInFields = z.input<typeof signInSchema>;
 const FIELD_NAMES = ['email', 'password'] as const;
@@ -31,11 +32,7 @@ export function SignInForm() {
     try {
       await signIn.mutateAsync(values);
     } catch (error) {
-      if (!isApiError(error)) return;
-      for (const name of FIELD_NAMES) {
-        const message = error.fields[name];
-        if (message) setError(name, { message });
-      }
+      applyServerErrors({ setError }, error, FIELD_NAMES);
     }
   });
 

@@ -1,9 +1,9 @@
 import { useQuery } from '@tanstack/react-query';
-import { sessionQueryOptions } from '../api/session-queries';
+import { sessionOptions } from '@/api/session';
 
 /** The session query: `data` is the signed-in person, null when signed out. */
 export function useSessionQuery() {
-  return useQuery(sessionQueryOptions());
+  return useQuery(sessionOptions());
 }
 
 /** The signed-in person; only for screens behind the sign-in guard. */

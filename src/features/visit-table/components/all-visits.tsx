@@ -5,7 +5,7 @@ import { Button, buttonVariants } from '@/components/ui/button';
 import { LoadError } from '@/components/ui/load-error';
 import { Pager } from '@/components/ui/pager';
 import { Spinner } from '@/components/ui/spinner';
-import { exportHref, visitTableOptions } from '../api/visit-table-queries';
+import { exportHref, visitTableOptions } from '@/api/visit-table';
 import { useVisitTableParams } from '../hooks/use-visit-table-params';
 import type { ColumnLinks } from './visit-columns';
 import { VisitTable } from './visit-table';

@@ -4,10 +4,17 @@ import { useId } from 'react';
 import { CAUSE_LABELS, VISIT_STATUSES } from '@shared/schemas/visit';
 import { SearchBox } from '@/components/ui/search-box';
 import { TextInput } from '@/components/ui/text-input';
-import { customerOptions, pressOptions, siteOptions, technicianOptions, type VisitTableRequest } from '../api/visit-table-queries';
+import { customerListOptions } from '@/api/customers';
+import { pressListOptions } from '@/api/presses';
+import { siteListOptions } from '@/api/sites';
+import { technicianOptions, type VisitTableRequest } from '@/api/visit-table';
 import type { VisitTableParam } from '../hooks/use-visit-table-params';
 import { FilterSelect } from './filter-select';
 
+// Every choice in one request; the choices change seldom, and the list must not show the previous
+// customer's sites while the next customer's load.
+const CHOICES = { pageSize: 100 } as const;
+const choiceOptions = { staleTime: 5 * 60_000, placeholderData: undefined } as const;
 
 interface VisitTableFiltersProps {
   request: VisitTableRequest;
@@ -18,9 +25,9 @@ export function VisitTableFilters({ request, onChange }: VisitTableFiltersProps)
   const id = useId();
   const customerId = request.customerId ?? '';
   const siteId = request.siteId ?? '';
-  const customers = useQuery(customerOptions());
-  const sites = useQuery(siteOptions(customerId));
-  const presses = useQuery(pressOptions(siteId));
+  const customers = useQuery({ ...customerListOptions(CHOICES), ...choiceOptions });
+  const sites = useQuery({ ...siteListOptions({ ...CHOICES, customerId: Number(customerId) }), ...choiceOptions, enabled: customerId !== '' });
+  const presses = useQuery({ ...pressListOptions({ ...CHOICES, siteId: Number(siteId) }), ...choiceOptions, enabled: siteId !== '' });
   const technicians = useQuery(technicianOptions());
   const statuses = (request.status ?? '').split(',').filter(Boolean);
 

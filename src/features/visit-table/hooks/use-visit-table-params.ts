@@ -1,7 +1,7 @@
 import { useCallback, useMemo } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import type { VisitTableSort } from '@shared/schemas/visit-table';
-import type { VisitTableRequest } from '../api/visit-table-queries';
+import type { VisitTableRequest } from '@/api/visit-table';
 
 const KEYS = ['status', 'customerId', 'siteId', 'pressId', 'technicianId', 'cause', 'from', 'to', 'q', 'sort', 'dir', 'page'] as const;
 export type VisitTableParam = (typeof KEYS)[number];

@@ -2,8 +2,8 @@ import { useQuery } from '@tanstack/react-query';
 import { useNavigate } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { errorMessage } from '@/lib/api-error';
-import { visitDetailOptions } from '../api/visit-queries';
-import { useReopenVisit } from '../api/use-reopen-visit';
+import { visitDetailOptions } from '@/api/visits';
+import { useReopenVisit } from '@/api/visits';
 
 /** The manager's comment on a returned visit, and the way back into it. */
 export function ReturnedVisitNote({ visitId }: { visitId: number }) {

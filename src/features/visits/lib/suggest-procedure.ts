@@ -1,4 +1,4 @@
-/** The procedures a visit can run, with the words in a displayed fault that point to each. */
+/** The procedures the start form offers (one, kept here until published procedures are listed to technicians), with the words in a displayed fault that point to each. */
 export const PROCEDURE_CHOICES = [
   {
     key: 'crank-angle-sensor-circuit',

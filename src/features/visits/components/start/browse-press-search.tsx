@@ -5,7 +5,10 @@ import type { Press } from '@shared/schemas/press';
 import type { Site } from '@shared/schemas/site';
 import { Button } from '@/components/ui/button';
 import { SearchBox } from '@/components/ui/search-box';
-import { customerPickOptions, pressPickOptions, sitePickOptions } from '../../api/press-lookup-queries';
+import { customerListOptions } from '@/api/customers';
+import { pressListOptions } from '@/api/presses';
+import { siteListOptions } from '@/api/sites';
+import { PICK_PAGE } from './pick-page';
 import { PickList } from './pick-list';
 import { PressChoiceList } from './press-choice-list';
 import { SearchResults } from './search-results';
@@ -15,9 +18,9 @@ export function BrowsePressSearch({ onChoose }: { onChoose: (press: Press) => vo
   const [customer, setCustomer] = useState<Customer | null>(null);
   const [site, setSite] = useState<Site | null>(null);
   const [q, setQ] = useState('');
-  const customers = useQuery({ ...customerPickOptions(q), enabled: !customer });
-  const sites = useQuery({ ...sitePickOptions(customer?.id ?? 0, q), enabled: customer !== null && !site });
-  const presses = useQuery({ ...pressPickOptions({ q, siteId: site?.id }), enabled: site !== null });
+  const customers = useQuery({ ...customerListOptions({ q, ...PICK_PAGE }), enabled: !customer });
+  const sites = useQuery({ ...siteListOptions({ customerId: customer?.id ?? 0, q, ...PICK_PAGE }), enabled: customer !== null && !site });
+  const presses = useQuery({ ...pressListOptions({ q, siteId: site?.id, ...PICK_PAGE }), enabled: site !== null });
 
   const back = (to: 'customer' | 'site') => {
     setQ('');

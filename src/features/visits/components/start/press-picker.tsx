@@ -1,3 +1,4 @@
+import { FieldError } from '@/components/ui/field-error';
 import type { Press } from '@shared/schemas/press';
 import { Button } from '@/components/ui/button';
 import { AssetTagSearch } from './asset-tag-search';
@@ -40,14 +41,7 @@ export function PressPicker({ press, onChange, error, errorId }: PressPickerProp
           </details>
         </>
       )}
-      {error && (
-        <p id={errorId} role="alert" className="flex items-start gap-2 text-base font-medium text-verdict-out_of_band">
-          <span aria-hidden="true" className="font-bold">
-            ✕
-          </span>
-          {error}
-        </p>
-      )}
+      <FieldError id={errorId} message={error} />
     </section>
   );
 }

@@ -8,9 +8,11 @@ import type { VisitDetail } from '@shared/schemas/visit-detail';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
+import { FieldError } from '@/components/ui/field-error';
 import { TextInput } from '@/components/ui/text-input';
-import { errorMessage, isApiError } from '@/lib/api-error';
-import { useCreateVisit } from '../../api/use-create-visit';
+import { applyServerErrors } from '@/lib/apply-server-errors';
+import { errorMessage } from '@/lib/api-error';
+import { useCreateVisit } from '@/api/visits';
 import { suggestProcedure } from '../../lib/suggest-procedure';
 import { PressPicker } from './press-picker';
 
@@ -53,11 +55,7 @@ export function StartVisitForm({ initialPress, onStarted }: { initialPress: Pres
     try {
       onStarted(await create.mutateAsync(values));
     } catch (error) {
-      if (!isApiError(error)) return;
-      for (const name of FIELD_NAMES) {
-        const message = error.fields[name];
-        if (message) setError(name, { message });
-      }
+      applyServerErrors({ setError }, error, FIELD_NAMES);
     }
   });
 
@@ -95,11 +93,7 @@ export function StartVisitForm({ initialPress, onStarted }: { initialPress: Pres
               <span className="block text-base text-ink-muted">{suggestion.because}</span>
             </span>
           </label>
-          {errors.procedureKey?.message && (
-            <p role="alert" className="text-base font-medium text-verdict-out_of_band">
-              {errors.procedureKey.message}
-            </p>
-          )}
+          <FieldError message={errors.procedureKey?.message} />
         </fieldset>
         <Button type="submit" size="lg" disabled={isSubmitting || create.isPending}>
           {isSubmitting || create.isPending ? 'Starting…' : 'Start the visit'}

@@ -1,15 +1,16 @@
 import { useState } from 'react';
+import { FIRMWARE_UNREADABLE, FIRMWARE_UNREADABLE_LABEL, FIRMWARE_VERSION_HINT, isFirmwareVersionAnswer } from '@shared/schemas/firmware-version';
 import type { Step } from '@shared/schemas/procedure';
 import type { StepResultRecord, VisitDetail } from '@shared/schemas/visit-detail';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
 import { cn } from '@/lib/cn';
-import type { StepAnswerVars } from '../../api/use-answer-step';
+import type { StepAnswerVars } from '@/api/visits';
 import type { ResilientSave } from '../../hooks/use-resilient-save';
 import { answerInputs, answerReason } from '../../lib/step-records';
 import { SaveStatusBanner } from '../save-status-banner';
-import { inputErrorsFrom } from './field-errors';
+import { serverFieldErrors } from '@/lib/apply-server-errors';
 
 const CONTROL = 'press_control_version';
 const MONITOR = 'monitor_module_version';
@@ -34,29 +35,42 @@ export function FirmwareStepView({ visit, step, result, answer, editable }: Firm
   const given = answerInputs(result);
   const [control, setControl] = useState(given[CONTROL] ?? visit.controlFirmwareFound ?? '');
   const [monitor, setMonitor] = useState(given[MONITOR] ?? visit.monitorFirmwareFound ?? '');
+  const [controlUnreadable, setControlUnreadable] = useState(given[CONTROL] === FIRMWARE_UNREADABLE);
+  const [monitorUnreadable, setMonitorUnreadable] = useState(given[MONITOR] === FIRMWARE_UNREADABLE);
   const [missing, setMissing] = useState<Record<string, string>>({});
-  const errors = { ...inputErrorsFrom(answer.error, answer.isRejected), ...missing };
+  const errors = { ...(answer.isRejected ? serverFieldErrors(answer.error, 'inputs.') : {}), ...missing };
   const label = (key: string, fallback: string) => step.inputs?.find((i) => i.key === key)?.label ?? fallback;
   const verdict = result?.outcome ? VERDICTS[result.outcome] : undefined;
 
   const check = () => {
+    const values = { [CONTROL]: controlUnreadable ? FIRMWARE_UNREADABLE : control.trim(), [MONITOR]: monitorUnreadable ? FIRMWARE_UNREADABLE : monitor.trim() };
     const blank: Record<string, string> = {};
-    if (!control.trim()) blank[CONTROL] = 'Type the press control firmware version as displayed.';
-    if (!monitor.trim()) blank[MONITOR] = 'Type the monitor module firmware version as displayed.';
+    for (const [key, unit] of [[CONTROL, 'press control'], [MONITOR, 'monitor module']] as const) {
+      if (!values[key]) blank[key] = `Type the ${unit} firmware version as displayed, or tick "${FIRMWARE_UNREADABLE_LABEL}".`;
+      else if (!isFirmwareVersionAnswer(values[key])) blank[key] = FIRMWARE_VERSION_HINT;
+    }
     setMissing(blank);
     if (Object.keys(blank).length > 0) return;
-    answer.save({ stepId: step.id, body: { id: crypto.randomUUID(), inputs: { [CONTROL]: control.trim(), [MONITOR]: monitor.trim() } } });
+    answer.save({ stepId: step.id, body: { id: crypto.randomUUID(), inputs: values } });
   };
+
+  const versionField = (key: string, fallback: string, value: string, setValue: (v: string) => void, unreadable: boolean, setUnreadable: (v: boolean) => void) => (
+    <div className="space-y-2">
+      <Field label={label(key, fallback)} error={errors[key]}>
+        <TextInput inputMode="decimal" spellCheck={false} maxLength={40} value={unreadable ? '' : value} disabled={!editable || unreadable} onChange={(e) => setValue(e.target.value)} />
+      </Field>
+      <label className="flex min-h-12 items-center gap-3 text-lg">
+        <input type="checkbox" className="h-6 w-6 accent-accent" checked={unreadable} disabled={!editable} onChange={(e) => setUnreadable(e.target.checked)} />
+        {FIRMWARE_UNREADABLE_LABEL}
+      </label>
+    </div>
+  );
 
   return (
     <div className="space-y-5">
       <div className="grid gap-4 sm:grid-cols-2">
-        <Field label={label(CONTROL, 'Press control firmware')} error={errors[CONTROL]}>
-          <TextInput inputMode="decimal" value={control} disabled={!editable} onChange={(e) => setControl(e.target.value)} />
-        </Field>
-        <Field label={label(MONITOR, 'Monitor module firmware')} error={errors[MONITOR]}>
-          <TextInput inputMode="decimal" value={monitor} disabled={!editable} onChange={(e) => setMonitor(e.target.value)} />
-        </Field>
+        {versionField(CONTROL, 'Press control firmware', control, setControl, controlUnreadable, setControlUnreadable)}
+        {versionField(MONITOR, 'Monitor module firmware', monitor, setMonitor, monitorUnreadable, setMonitorUnreadable)}
       </div>
       <SaveStatusBanner save={answer} what="the firmware versions" />
       {editable && (

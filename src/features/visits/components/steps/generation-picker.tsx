@@ -1,5 +1,7 @@
 import { useId } from 'react';
 import type { BandSetRecord, VisitDetail } from '@shared/schemas/visit-detail';
+import { Field } from '@/components/ui/field';
+import { Select } from '@/components/ui/select';
 
 interface GenerationPickerProps {
   suggestion: VisitDetail['generationSuggestion'];
@@ -30,17 +32,8 @@ export function GenerationPicker({ suggestion, bandSets, value, onChange, disabl
       ) : (
         <p className="text-lg text-ink">Enter the readings: a generation is suggested from them. Or choose it if you know it.</p>
       )}
-      <div className="space-y-1.5">
-        <label htmlFor={`${id}-select`} className="block text-lg font-semibold text-ink">
-          Judge the readings as
-        </label>
-        <select
-          id={`${id}-select`}
-          value={value}
-          disabled={disabled}
-          onChange={(e) => onChange(e.target.value)}
-          className="block min-h-touch w-full max-w-md rounded-lg border-2 border-surface-edge bg-surface-raised px-3 text-lg text-ink focus:border-accent focus:outline-none focus:ring-[3px] focus:ring-accent/40"
-        >
+      <Field label="Judge the readings as">
+        <Select fit="medium" value={value} disabled={disabled} onChange={(e) => onChange(e.target.value)}>
           <option value="">Choose a sensor generation…</option>
           {bandSets.map((b) => (
             <option key={b.generation} value={b.generation}>
@@ -48,8 +41,8 @@ export function GenerationPicker({ suggestion, bandSets, value, onChange, disabl
               {best?.generationKey === b.generation ? ' (suggested)' : ''}
             </option>
           ))}
-        </select>
-      </div>
+        </Select>
+      </Field>
       <p className="text-base text-ink-muted">Your choice is sent with this step; check it against the sensor before relying on it.</p>
     </section>
   );

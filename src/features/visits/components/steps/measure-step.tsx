@@ -4,7 +4,7 @@ import type { ResolverOutput } from '@shared/domain/resolver-output';
 import type { MeasureStep, ReadingSpec } from '@shared/schemas/procedure';
 import type { StepResultRecord, VisitDetail } from '@shared/schemas/visit-detail';
 import { Button } from '@/components/ui/button';
-import type { StepAnswerVars } from '../../api/use-answer-step';
+import type { StepAnswerVars } from '@/api/visits';
 import type { ResilientSave } from '../../hooks/use-resilient-save';
 import { conditionsKey, draftFromReading, parseConditions, storedConditions } from '../../lib/reading-conditions';
 import { answerReason, currentReadings, outcomeLabel } from '../../lib/step-records';
@@ -25,7 +25,7 @@ interface MeasureStepViewProps {
 const specMatches = (spec: ReadingSpec) => (r: { quantity: string; circuit: string; position: string }) =>
   r.quantity === spec.quantity && r.circuit === spec.circuit && r.position === spec.position;
 
-/** A stator voltage is judged with its partner, and excitation gives the ratio (DESIGN.md §4.6). */
+/** The two stator voltages are judged together (their vector magnitude does not change with crank angle), and the excitation gives the transformation ratio. */
 function contextFor(spec: ReadingSpec, specs: ReadingSpec[], drafts: Record<string, string>): EntryContext {
   if (spec.quantity !== 'ac_voltage' || spec.circuit === 'rotor') return {};
   const partner = specs.find((s) => s.quantity === 'ac_voltage' && s.position === spec.position && s.circuit === OTHER_STATOR[spec.circuit as 'stator_1' | 'stator_2']);

@@ -3,11 +3,11 @@ import type { Step } from '@shared/schemas/procedure';
 import type { StepResultRecord, VisitDetail } from '@shared/schemas/visit-detail';
 import { Button } from '@/components/ui/button';
 import { cn } from '@/lib/cn';
-import type { StepAnswerVars } from '../../api/use-answer-step';
+import type { StepAnswerVars } from '@/api/visits';
 import type { ResilientSave } from '../../hooks/use-resilient-save';
 import { answerInputs } from '../../lib/step-records';
 import { SaveStatusBanner } from '../save-status-banner';
-import { inputErrorsFrom } from './field-errors';
+import { serverFieldErrors } from '@/lib/apply-server-errors';
 import { StepInputFields } from './step-input-fields';
 
 type OutcomeStep = Extract<Step, { kind: 'check' | 'choice' | 'inspect' }>;
@@ -31,7 +31,7 @@ export function OutcomeStepView({ visit, step, result, answer, editable, renderP
     return given;
   });
   const [missing, setMissing] = useState<Record<string, string>>({});
-  const errors = { ...inputErrorsFrom(answer.error, answer.isRejected), ...missing };
+  const errors = { ...(answer.isRejected ? serverFieldErrors(answer.error, 'inputs.') : {}), ...missing };
 
   const choose = (outcome: string) => {
     const blank = Object.fromEntries(

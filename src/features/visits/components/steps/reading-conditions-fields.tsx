@@ -1,5 +1,6 @@
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
+import { Select } from '@/components/ui/select';
 import { TextInput } from '@/components/ui/text-input';
 import type { ConditionsDraft, ConditionsErrors } from '../../lib/reading-conditions';
 
@@ -11,9 +12,6 @@ interface ReadingConditionsFieldsProps {
   onResave?: () => void;
   disabled: boolean;
 }
-
-const selectClass =
-  'block min-h-touch w-full rounded-lg border-2 border-surface-edge bg-surface-raised px-3 text-lg text-ink focus:border-accent focus:outline-none focus:ring-[3px] focus:ring-accent/40';
 
 /** Winding temperature and cable run, folded away: most readings need neither. */
 export function ReadingConditionsFields({ draft, errors, onChange, onResave, disabled }: ReadingConditionsFieldsProps) {
@@ -34,16 +32,16 @@ export function ReadingConditionsFields({ draft, errors, onChange, onResave, dis
         </Field>
         <div className="grid grid-cols-2 gap-3">
           <Field label="Unit">
-            <select className={selectClass} value={draft.lengthUnit} disabled={disabled} onChange={(e) => set({ lengthUnit: e.target.value as ConditionsDraft['lengthUnit'] })}>
+            <Select value={draft.lengthUnit} disabled={disabled} onChange={(e) => set({ lengthUnit: e.target.value as ConditionsDraft['lengthUnit'] })}>
               <option value="ft">ft</option>
               <option value="m">m</option>
-            </select>
+            </Select>
           </Field>
           <Field label="Length is">
-            <select className={selectClass} value={draft.lengthIs} disabled={disabled} onChange={(e) => set({ lengthIs: e.target.value as ConditionsDraft['lengthIs'] })}>
+            <Select value={draft.lengthIs} disabled={disabled} onChange={(e) => set({ lengthIs: e.target.value as ConditionsDraft['lengthIs'] })}>
               <option value="one_way">one way</option>
               <option value="loop">the whole loop</option>
-            </select>
+            </Select>
           </Field>
         </div>
       </div>

@@ -1,3 +1,4 @@
+import { FieldError } from '@/components/ui/field-error';
 import { useEffect, useEffectEvent, useId, useRef, type KeyboardEvent } from 'react';
 import { judgeEntry, type EntryContext, type EntryJudgement } from '@shared/domain/judge-entry';
 import { parseEntry } from '@shared/domain/parse-entry';
@@ -8,7 +9,7 @@ import { Button } from '@/components/ui/button';
 import { TextInput } from '@/components/ui/text-input';
 import { VerdictMark } from '@/components/ui/verdict-mark';
 import { isApiError } from '@/lib/api-error';
-import { useSaveReading } from '../../api/use-save-reading';
+import { useSaveReading } from '../../hooks/use-save-reading';
 import { conditionsKey, storedConditions, type ReadingConditions } from '../../lib/reading-conditions';
 import { SaveStatusBanner } from '../save-status-banner';
 import { BandGauge } from './band-gauge';
@@ -134,14 +135,7 @@ export function ReadingInput(props: ReadingInputProps) {
           </Button>
         ))}
       </div>
-      {error && (
-        <p id={errorId} role="alert" className="flex items-start gap-2 text-base font-medium text-verdict-out_of_band">
-          <span aria-hidden="true" className="font-bold">
-            ✕
-          </span>
-          {error}
-        </p>
-      )}
+      <FieldError id={errorId} message={error} />
       <div id={verdictId} aria-live="polite" className="space-y-2">
         <ReadingVerdict client={client} stored={savedMatches ? stored : undefined} saving={save.isSaving} hasBands={bands !== null} entered={entered} parseOk={!parseError} />
       </div>

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import type { SafetyGateStep } from '@shared/schemas/procedure';
 import type { StepResultRecord, VisitDetail } from '@shared/schemas/visit-detail';
 import { Button } from '@/components/ui/button';
-import type { StepAnswerVars } from '../../api/use-answer-step';
+import type { StepAnswerVars } from '@/api/visits';
 import type { ResilientSave } from '../../hooks/use-resilient-save';
 import { formatWhen, type PersonNames } from '../../lib/step-records';
 import { SaveStatusBanner } from '../save-status-banner';

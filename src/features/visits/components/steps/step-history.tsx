@@ -1,3 +1,4 @@
+import { firmwareVersionText } from '@shared/schemas/firmware-version';
 import type { Step } from '@shared/schemas/procedure';
 import type { VisitDetail } from '@shared/schemas/visit-detail';
 import { answerInputs, formatWhen, outcomeLabel, supersededResults, type PersonNames } from '../../lib/step-records';
@@ -18,7 +19,7 @@ export function StepHistory({ visit, step, names }: { visit: VisitDetail; step: 
             <li key={r.id} className="border-l-4 border-surface-line pl-3 text-lg text-ink">
               <p>
                 <span className="font-semibold">{outcomeLabel(step, r.outcome) ?? 'No outcome'}</span>
-                {inputs.length > 0 && <span className="text-ink-muted"> · {inputs.map(([k, v]) => `${k.replaceAll('_', ' ')}: ${v}`).join(', ')}</span>}
+                {inputs.length > 0 && <span className="text-ink-muted"> · {inputs.map(([k, v]) => `${k.replaceAll('_', ' ')}: ${firmwareVersionText(v)}`).join(', ')}</span>}
               </p>
               <p className="text-base text-ink-muted">
                 Answered by {names(r.createdBy)} on {formatWhen(r.createdAt)}; replaced {r.supersededAt ? formatWhen(r.supersededAt) : ''}

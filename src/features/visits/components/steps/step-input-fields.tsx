@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import type { StepInput } from '@shared/schemas/procedure';
 import type { BandSetRecord } from '@shared/schemas/visit-detail';
 import { Field } from '@/components/ui/field';
+import { Select } from '@/components/ui/select';
 import { TextInput } from '@/components/ui/text-input';
 
 interface StepInputFieldsProps {
@@ -15,9 +16,6 @@ interface StepInputFieldsProps {
   disabled: boolean;
 }
 
-const selectClass =
-  'block min-h-touch w-full max-w-md rounded-lg border-2 border-surface-edge bg-surface-raised px-3 text-lg text-ink focus:border-accent focus:outline-none focus:ring-[3px] focus:ring-accent/40 aria-[invalid=true]:border-verdict-out_of_band';
-
 /** The typed inputs a step asks for alongside its outcome. */
 export function StepInputFields({ inputs, values, errors, onChange, bandSets, renderPhotos, disabled }: StepInputFieldsProps) {
   return (
@@ -28,21 +26,21 @@ export function StepInputFields({ inputs, values, errors, onChange, bandSets, re
         if (input.type === 'sensor_generation') {
           return (
             <Field key={input.key} label={label} error={errors[input.key]}>
-              <select className={selectClass} value={values[input.key] ?? ''} disabled={disabled} onChange={(e) => onChange(input.key, e.target.value)}>
+              <Select fit="medium" value={values[input.key] ?? ''} disabled={disabled} onChange={(e) => onChange(input.key, e.target.value)}>
                 <option value="">Not chosen</option>
                 {bandSets.map((b) => (
                   <option key={b.generation} value={b.generation}>
                     {b.label}
                   </option>
                 ))}
-              </select>
+              </Select>
             </Field>
           );
         }
         return (
           <Field key={input.key} label={label} error={errors[input.key]}>
             <TextInput
-              className="max-w-md"
+              fit="medium"
               inputMode={input.type === 'version' ? 'decimal' : undefined}
               value={values[input.key] ?? ''}
               disabled={disabled}

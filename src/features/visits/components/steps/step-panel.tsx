@@ -3,7 +3,7 @@ import type { Step } from '@shared/schemas/procedure';
 import type { VisitDetail } from '@shared/schemas/visit-detail';
 import { Banner } from '@/components/ui/banner';
 import { SafetyNotice, defersToPlant } from '@/components/ui/safety-notice';
-import { useAnswerStep } from '../../api/use-answer-step';
+import { useAnswerStep } from '../../hooks/use-answer-step';
 import { currentResult, isVisitOpen, type PersonNames } from '../../lib/step-records';
 import { FindingView } from './finding-view';
 import { FirmwareStepView } from './firmware-step';
