@@ -1,4 +1,4 @@
-// SQL for a versioned-records table (see server/modules/reference/versioned-records.ts), for
+// SQL for a versioned-records table (see server/lib/versioned-records/versioned-service.ts), for
 // migrations to call. The trigger functions refuse_published_change() and
 // refuse_published_delete() exist since the reference-data and drafts migrations.
 

@@ -5,7 +5,7 @@ import { apiRequest } from '@/lib/api-client';
 type DraftRequest<D> = (arg: D) => { path: string; body?: unknown };
 
 /**
- * The client half of a versioned resource on the server (server/modules/reference/versioned-routes.ts):
+ * The client half of a versioned resource on the server (server/lib/versioned-records/versioned-routes.ts):
  * its key factory, queryOptions factories, and mutations that refetch everything under its keys,
  * since every change alters the list (current, draft, versions).
  * L: the list answer, R: one version, D: what a new draft needs, S: the body of PUT /:id.

@@ -4,7 +4,7 @@ import { pino } from 'pino';
 import supertest from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { logger } from '../../server/lib/logger';
-import { renderLinks } from '../../server/modules/emails/email-links';
+import { renderLinks } from '../../server/modules/emails/email-links.service';
 import { signedInAgent, useApiApp } from '../api-app';
 import { makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';

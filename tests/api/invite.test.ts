@@ -1,7 +1,7 @@
 import supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { INVITE_LIFETIME_MS, hashInviteToken } from '../../server/modules/admin/invite-token';
-import { renderLinks } from '../../server/modules/emails/email-links';
+import { renderLinks } from '../../server/modules/emails/email-links.service';
 import { anonymous, signedInAgent, useApiApp } from '../api-app';
 import { makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';

@@ -6,7 +6,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { officeVisitRecordSchema, visitRecordSchema, type VisitRecord } from '../../shared/schemas/visit-record';
 import { loadEnv } from '../../server/config/env';
 import { ReportIssue } from '../../server/modules/reports/report-issues.model';
-import { renderLinks } from '../../server/modules/emails/email-links';
+import { renderLinks } from '../../server/modules/emails/email-links.service';
 import { readReportLink, reportLinkKey, signReportLink } from '../../server/modules/reports/report-link';
 import { anonymous, signedInAgent, useApiApp } from '../api-app';
 import { makePress, makeUser } from '../factories';

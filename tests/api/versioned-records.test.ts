@@ -4,7 +4,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { z } from 'zod';
 import type { SessionUser } from '../../shared/schemas/session';
 import { dropVersionedTableRulesSql, versionedColumnsSql, versionedTableRulesSql } from '../../server/db/versioned-table';
-import { versionInfo, versionedService, type VersionedResource } from '../../server/modules/reference/versioned-records';
+import { versionInfo, versionedService, type VersionedResource } from '../../server/lib/versioned-records/versioned-service';
 import { makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
 

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { requireRole } from '../../auth/require-role';
-import { versionedRoutes } from '../reference/versioned-routes';
+import { versionedRoutes } from '../../lib/versioned-records/versioned-routes';
 import { bandSets } from './band-sets';
 import { firmwareRules } from './firmware-rules';
 import { procedureRoutes } from './procedures';

@@ -2,7 +2,7 @@ import { bandSetDraftSchema, type BandSetGeneration, type BandSetVersionRecord }
 import { generationKeySchema } from '../../../shared/schemas/band-set';
 import { AppError } from '../../lib/errors';
 import { BandSetVersion } from '../reference/reference.model';
-import { versionInfo, type VersionedResource } from '../reference/versioned-records';
+import { versionInfo, type VersionedResource } from '../../lib/versioned-records/versioned-service';
 
 const toRecord = (b: BandSetVersion): BandSetVersionRecord => ({ ...versionInfo(b), generation: b.generation, label: b.label, bands: b.bands });
 

@@ -1,7 +1,7 @@
 import { firmwareRulesDraftSchema, type FirmwareRuleSetRecord, type FirmwareRuleSets } from '../../../shared/schemas/admin-reference';
 import { AppError } from '../../lib/errors';
 import { FirmwareRuleSet } from '../reference/reference.model';
-import { versionInfo, type VersionedResource } from '../reference/versioned-records';
+import { versionInfo, type VersionedResource } from '../../lib/versioned-records/versioned-service';
 
 const toRecord = (r: FirmwareRuleSet): FirmwareRuleSetRecord => ({ ...versionInfo(r), rules: r.rules });
 

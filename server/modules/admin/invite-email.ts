@@ -1,5 +1,5 @@
 import type { Transaction } from 'sequelize';
-import { LINK_MARK, LinkUnavailable, registerLinkRenderer } from '../emails/email-links';
+import { LINK_MARK, LinkUnavailable, registerLinkRenderer } from '../emails/email-links.service';
 import { enqueueEmail } from '../emails/outbox';
 import { UserInvite } from './invite.model';
 import { configureInviteKey, hashInviteToken, inviteTokenFor, invitePath } from './invite-token';

@@ -5,9 +5,9 @@ import { validateProcedure } from '../../../shared/domain/validate-procedure';
 import { AppError } from '../../lib/errors';
 import { valid, validate } from '../../lib/validate';
 import { ProcedureVersion } from '../reference/reference.model';
-import { versionInfo, type VersionedResource } from '../reference/versioned-records';
+import { versionInfo, type VersionedResource } from '../../lib/versioned-records/versioned-service';
 import { procedureDiagram } from './procedure-diagram';
-import { versionedRoutes } from '../reference/versioned-routes';
+import { versionedRoutes } from '../../lib/versioned-records/versioned-routes';
 
 /** Runs the validator; the diagram is drawn whenever the JSON has the shape of a procedure, so a broken branch can be seen. */
 export function checkProcedure(definition: unknown): ProcedureCheck {

@@ -3,8 +3,8 @@ import type { Page } from '../../../shared/schemas/common';
 import type { SessionUser } from '../../../shared/schemas/session';
 import { AppError } from '../../lib/errors';
 import { toPage } from '../../lib/paging';
+import { linkRefusal } from './email-links.service';
 import { audit } from '../audit/audit';
-import { reportResendRefusal } from '../reports/reports.service';
 import { Email, EmailAttachment } from './emails.model';
 import type { EmailDto, EmailListQuery, EmailResendInput } from './emails.schema';
 
@@ -65,7 +65,11 @@ export async function resendEmail(user: SessionUser, id: number, input: EmailRes
           : 'Only report e-mails can be sent again from here.',
       );
     }
-    const refused = await reportResendRefusal(email.linkKind === 'report' ? email.linkRef : null, transaction);
+    // The report module's link renderer knows when a report was corrected or its link expired.
+    const refused =
+      email.linkKind === 'report' && email.linkRef !== null
+        ? await linkRefusal('report', email.linkRef)
+        : 'This report e-mail was stored before links were kept apart from e-mails and cannot be sent again.';
     if (refused) throw new AppError(409, 'report_not_resendable', `${refused} Nothing was sent.`);
     if (email.status === 'sending') throw new AppError(409, 'email_sending', 'This e-mail is being sent right now. Look again in a minute before resending.');
     const before = { status: email.status, to: email.toAddress };

@@ -1,7 +1,7 @@
 import type { Transaction } from 'sequelize';
 import { logger } from '../../lib/logger';
 import { audit } from '../audit/audit';
-import { LinkUnavailable, renderLinks } from './email-links';
+import { LinkUnavailable, renderLinks } from './email-links.service';
 import { Email, EmailAttachment, type LinkKind } from './emails.model';
 import { mailer } from './mail-transport';
 import { MAX_ATTEMPTS, describeSendError, isPermanentSmtpError, retryDelayMs } from './retry-policy';

@@ -4,7 +4,7 @@ import { audit } from '../audit/audit';
 import { Attachment } from '../attachments/attachments.model';
 import type { FileStorage } from '../attachments/storage';
 import { Email } from '../emails/emails.model';
-import { LINK_MARK, LinkUnavailable, registerLinkRenderer } from '../emails/email-links';
+import { LINK_MARK, LinkUnavailable, registerLinkRenderer } from '../emails/email-links.service';
 import { enqueueEmail } from '../emails/outbox';
 import { visitReference } from '../../../shared/format/visit-reference';
 import { Visit } from '../visits/visits.model';
@@ -47,18 +47,6 @@ async function signableIssue(issueId: number, transaction?: Transaction): Promis
   if (newest !== issue.issueNumber) throw new LinkUnavailable('Not sent: a corrected report replaced this one; its link no longer opens.');
   if (issue.expiresAt.getTime() <= Date.now()) throw new LinkUnavailable(`Not sent: the report link expired on ${issue.expiresAt.toISOString().slice(0, 10)}.`);
   return signReportLink(settings().linkKey, { visitId: issue.visitId, issueNumber: issue.issueNumber, expiresAt: issue.expiresAt.getTime() / 1000 }, issue.nonce);
-}
-
-/** Why a report e-mail cannot go out again, or null when it can (checked before a manager's resend). */
-export async function reportResendRefusal(issueId: number | null, transaction?: Transaction): Promise<string | null> {
-  if (issueId === null) return 'This report e-mail was stored before links were kept apart from e-mails and cannot be sent again.';
-  try {
-    await signableIssue(issueId, transaction);
-    return null;
-  } catch (err) {
-    if (err instanceof LinkUnavailable) return err.message.replace(/^Not sent: /, '').replace(/^./, (c) => c.toUpperCase());
-    throw err;
-  }
 }
 
 function settings(): ReportSettings {

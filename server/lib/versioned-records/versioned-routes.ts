@@ -2,8 +2,8 @@ import { Router } from 'express';
 import type { Model } from 'sequelize';
 import { z } from 'zod';
 import { idParamSchema } from '../../../shared/schemas/common';
-import { valid, validate } from '../../lib/validate';
-import { isBodyDraft, versionedService, type VersionedResource, type VersionedRow } from './versioned-records';
+import { valid, validate } from '../validate';
+import { isBodyDraft, versionedService, type VersionedResource, type VersionedRow } from './versioned-service';
 
 /**
  * The routes of a versioned resource (mounted under its own path, roles checked by the mount):

@@ -35,3 +35,16 @@ export async function renderLinks(email: { linkKind: LinkKind | null; linkRef: n
   const link = await render(email.linkRef);
   return { html: email.html.replaceAll(LINK_MARK, escapeHtml(link)), text: email.text.replaceAll(LINK_MARK, link) };
 }
+
+/** Why the link of this kind and row cannot be made now (said to a person), or null when it can. */
+export async function linkRefusal(kind: LinkKind, ref: number): Promise<string | null> {
+  const render = renderers.get(kind);
+  if (!render) throw new Error(`no link renderer for ${kind}: build the app with createApp() first`);
+  try {
+    await render(ref);
+    return null;
+  } catch (err) {
+    if (err instanceof LinkUnavailable) return err.message.replace(/^Not sent: /, '').replace(/^./, (c) => c.toUpperCase());
+    throw err;
+  }
+}

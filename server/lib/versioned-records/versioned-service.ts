@@ -2,9 +2,9 @@ import type { CreationAttributes, Model, ModelStatic, Transaction, WhereOptions 
 import type { z } from 'zod';
 import type { VersionInfo } from '../../../shared/schemas/admin-reference';
 import type { SessionUser } from '../../../shared/schemas/session';
-import { withConstraintMessages } from '../../lib/db-errors';
-import { AppError, notFound } from '../../lib/errors';
-import { audit } from '../audit/audit';
+import { withConstraintMessages } from '../db-errors';
+import { AppError, notFound } from '../errors';
+import { audit } from '../../modules/audit/audit';
 
 // One pattern for every kind of versioned reference data: rows of a "family" (a band set's
 // generation, a procedure's key, or the whole table) are numbered versions; at most one is an
