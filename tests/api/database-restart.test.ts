@@ -64,7 +64,8 @@ beforeAll(async () => {
   const { press } = await makePress({ assetTag: 'RS-1' });
   await press.update({ sensorGeneration: 'test-gen' });
   const user = await makeUser('technician');
-  tech = supertest.agent(base);
+  // Our own pages send their origin; the same-origin rule refuses changes without it.
+  tech = supertest.agent(base).set('Origin', base);
   await tech.post('/api/session').send({ email: user.email, password: 'correct horse battery staple' }).expect(200);
   const visit = await tech.post('/api/visits').send({ pressId: press.id, faultDisplayed: 'Crank angle sensor fault 31', controlFirmwareFound: '3.4' });
   expect(visit.status, JSON.stringify(visit.body)).toBe(201);

@@ -5,7 +5,7 @@ import supertest from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { logger } from '../../server/lib/logger';
 import { renderLinks } from '../../server/modules/emails/email-links.service';
-import { signedInAgent, useApiApp } from '../api-app';
+import { anonymous, signedInAgent, useApiApp } from '../api-app';
 import { makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
 
@@ -70,7 +70,7 @@ describe('a manager trying to take over an administrator invitation', () => {
     const stored = await query<{ blob: string }>(`SELECT html || ' ' || text AS blob FROM emails UNION ALL SELECT token_hash || ' ' || coalesce(nonce, '') FROM user_invites`);
     const candidates = [...new Set(stored.flatMap((r) => r.blob.match(/[A-Za-z0-9_-]{20,64}/g) ?? []))].slice(0, 20);
     for (const candidate of candidates) {
-      const res = await supertest(app()).post(`/api/invites/${candidate}/accept`).send({ password: 'the attacker picked this' });
+      const res = await anonymous(app()).post(`/api/invites/${candidate}/accept`).send({ password: 'the attacker picked this' });
       expect([400, 404], `${candidate}: ${res.status}`).toContain(res.status);
     }
     expect(after.text).toContain('{{link}}');
@@ -80,7 +80,7 @@ describe('a manager trying to take over an administrator invitation', () => {
     const token = /accept-invite\/([A-Za-z0-9_-]{43})/.exec(text)![1]!;
     const holding = await query('SELECT id FROM emails WHERE strpos(html, :token) > 0 OR strpos(text, :token) > 0', { token });
     expect(holding).toEqual([]);
-    const accepted = await supertest(app()).post(`/api/invites/${token}/accept`).set('User-Agent', 'invitee-tablet/1.0').send({ password: 'plant floor at six sharp' });
+    const accepted = await anonymous(app()).post(`/api/invites/${token}/accept`).set('User-Agent', 'invitee-tablet/1.0').send({ password: 'plant floor at six sharp' });
     expect(accepted.status).toBe(200);
 
     // Accepting is audited, with the device it came from.

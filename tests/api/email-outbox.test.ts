@@ -164,7 +164,7 @@ describe('the outbox over SMTP', () => {
     expect(mail.html).toContain(`http://reports.test${link}`);
     const opened = await supertest(app()).get(`/api${link}`);
     expect(opened.status).toBe(200);
-    expect(opened.body.reference).toBe(v.reference);
+    expect(opened.body.header.reference).toBe(v.reference);
 
     const [audit] = await db.sequelize.query(`SELECT detail FROM audit_events WHERE visit_id = :id AND action = 'email_sent'`, { replacements: { id: v.id } });
     expect(audit).toHaveLength(1);

@@ -1,6 +1,5 @@
-import supertest from 'supertest';
 import { describe, expect, it } from 'vitest';
-import { useApiApp } from '../api-app';
+import { anonymous, useApiApp } from '../api-app';
 import { TEST_PASSWORD, makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
 
@@ -10,7 +9,7 @@ const { app } = useApiApp(db, { TRUST_PROXY: '1' });
 // The same rules with a smaller address limit, so the many-accounts run needs fewer (slow, argon2) checks.
 const small = useApiApp(db, { TRUST_PROXY: '1', SIGNIN_ADDRESS_LIMIT: '20' });
 
-const signIn = (email: string, password: string, from: string, on = app) => supertest(on()).post('/api/session').set('X-Forwarded-For', from).send({ email, password });
+const signIn = (email: string, password: string, from: string, on = app) => anonymous(on()).post('/api/session').set('X-Forwarded-For', from).send({ email, password });
 const failuresOf = async (account: string) =>
   ((await db.sequelize.query('SELECT count(*)::int AS n FROM sign_in_failures WHERE account = :account', { replacements: { account } }))[0] as { n: number }[])[0]!.n;
 
