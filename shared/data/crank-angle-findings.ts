@@ -1,5 +1,8 @@
 import type { FindingStep } from '../schemas/procedure';
-import { RETURN_TO_SERVICE } from './safety-messages';
+import { LIVE_WORK, RELOCK_AFTER_LIVE, REPAIR_LOCKED_OUT, RETURN_TO_SERVICE, SLIDE_MOTION, BOARD_HANDLING } from './safety-messages';
+
+const SENSOR_REPLACEMENT =
+  "Replace the sensor with one of the same generation, align it to top dead centre as the control maker describes, and record serials in and out.";
 
 const RETEST = 'Then re-run the checks that led here and carry out the return-to-service checks.';
 
@@ -11,21 +14,39 @@ export const CRANK_ANGLE_FINDINGS: FindingStep[] = [
     title: 'Firmware pairing not compatible',
     instructions: 'Record both versions exactly as displayed, with a photo of each display.',
     cause: 'firmware',
-    conclusion: 'The press-control and monitor-module firmware versions are not a compatible pairing.',
-    recommendedAction: `Bring the two units to a compatible pairing (update one, or fit a unit with compatible firmware) following the control maker's update instructions. ${RETEST}`,
+    conclusion: 'The firmware of the press control and its monitoring unit (or whatever pair the control has) is not a compatible pairing.',
+    recommendedAction: `With the press locked out, bring the two units to a compatible pairing (update one, or fit a unit with compatible firmware) following the control maker's update and validation instructions. ${RETEST}`,
     escalate: false,
-    safety: RETURN_TO_SERVICE,
+    hazards: ['unit_swap'],
+    safety: REPAIR_LOCKED_OUT,
+    cautions: [RETURN_TO_SERVICE],
+  },
+  {
+    id: 'finding-firmware-undecided',
+    kind: 'finding',
+    title: 'Escalate: firmware pairing not confirmed',
+    instructions: 'Record both versions exactly as displayed, with a photo of each display, and whom you asked.',
+    cause: 'firmware',
+    conclusion: 'No compatibility rule covers the two firmware versions, and nobody has approved the pairing yet.',
+    recommendedAction:
+      "Escalate to the service manager with both versions. Do not change firmware or swap units until the pairing is decided; if the press cannot run safely meanwhile, lock it out and tag it not fit for production under the plant's procedure.",
+    escalate: true,
+    hazards: ['unit_swap'],
+    safety: REPAIR_LOCKED_OUT,
+    cautions: [RETURN_TO_SERVICE],
   },
   {
     id: 'finding-jumper',
     kind: 'finding',
-    title: 'Bus-role jumper in the wrong position',
-    instructions: 'Photograph the jumper before and after the change.',
+    title: 'Role setting of the monitoring unit wrong',
+    instructions: 'Photograph the role setting before and after the change.',
     cause: 'configuration',
-    conclusion: 'The monitor module runs under the press control but its bus-role jumper is not in the follower position.',
-    recommendedAction: `With the press still locked out, remove the board above the monitor module, move the jumper to the follower position, refit the board and its cables as they were. ${RETEST}`,
+    conclusion: "The monitoring unit's role setting does not match how it works with the press control.",
+    recommendedAction: `With the press still locked out, set the role as the control maker's manual requires (jumper, switch or parameter); if a board had to come out, refit it and its cables as they were, holding it by its edges with a grounded wrist strap. ${RETEST}`,
     escalate: false,
+    hazards: ['board_handling'],
     safety: RETURN_TO_SERVICE,
+    cautions: [BOARD_HANDLING],
   },
   {
     id: 'finding-connector',
@@ -36,7 +57,9 @@ export const CRANK_ANGLE_FINDINGS: FindingStep[] = [
     conclusion: 'The sensor cable\'s circular connector was not fully coupled or has damaged pins.',
     recommendedAction: `Straighten or replace damaged contacts or the connector, seat it straight and screw the coupling ring fully home by hand. ${RETEST}`,
     escalate: false,
+    hazards: ['unit_swap'],
     safety: RETURN_TO_SERVICE,
+    cautions: [REPAIR_LOCKED_OUT],
   },
   {
     id: 'finding-conductor',
@@ -47,7 +70,9 @@ export const CRANK_ANGLE_FINDINGS: FindingStep[] = [
     conclusion: 'A conductor of the sensor wiring is broken or frayed.',
     recommendedAction: `Repair the termination or replace the damaged cable; route and strain-relieve it so it does not flex at the same point again. ${RETEST}`,
     escalate: false,
+    hazards: ['unit_swap'],
     safety: RETURN_TO_SERVICE,
+    cautions: [REPAIR_LOCKED_OUT],
   },
   {
     id: 'finding-clamp',
@@ -58,7 +83,9 @@ export const CRANK_ANGLE_FINDINGS: FindingStep[] = [
     conclusion: 'A terminal screw was clamping the conductor\'s insulation instead of bare conductor.',
     recommendedAction: `Strip the conductor to the terminal's length, fit a ferrule where the terminal calls for one, and tighten to the terminal's torque. ${RETEST}`,
     escalate: false,
+    hazards: ['unit_swap'],
     safety: RETURN_TO_SERVICE,
+    cautions: [REPAIR_LOCKED_OUT],
   },
   {
     id: 'finding-cable',
@@ -69,7 +96,9 @@ export const CRANK_ANGLE_FINDINGS: FindingStep[] = [
     conclusion: 'The windings read right at the sensor but not through the cable: the cable between control and sensor is at fault.',
     recommendedAction: `Replace the sensor cable (or repair the located fault), then measure the windings again at the control end. ${RETEST}`,
     escalate: false,
+    hazards: ['unit_swap'],
     safety: RETURN_TO_SERVICE,
+    cautions: [REPAIR_LOCKED_OUT],
   },
   {
     id: 'finding-sensor',
@@ -78,9 +107,38 @@ export const CRANK_ANGLE_FINDINGS: FindingStep[] = [
     instructions: 'Record the sensor\'s serial number; it goes on the parts list when replaced.',
     cause: 'sensor',
     conclusion: 'A winding of the sensor itself reads out of band, open, short or unbalanced at the sensor\'s own pins.',
-    recommendedAction: `Replace the sensor with one of the same generation, align it to top dead centre as the control maker describes, and record serials in and out. ${RETEST}`,
+    recommendedAction: `${SENSOR_REPLACEMENT} ${RETEST}`,
     escalate: false,
+    hazards: ['unit_swap', 'slide_motion'],
     safety: RETURN_TO_SERVICE,
+    cautions: [REPAIR_LOCKED_OUT, SLIDE_MOTION],
+  },
+  {
+    id: 'finding-sensor-output',
+    kind: 'finding',
+    title: 'Crank-angle sensor suspected: low output with good drive',
+    instructions: "Record the readings and the sensor's serial number; it goes on the parts list when replaced.",
+    cause: 'sensor',
+    conclusion:
+      "The excitation reaches the sensor in range and the windings and the cable's insulation read right, but the stator output (magnitude or transformation ratio) is low: shorted turns or a rotary-transformer fault in the sensor hardly change DC resistance.",
+    recommendedAction: `${SENSOR_REPLACEMENT} ${RETEST}`,
+    escalate: false,
+    hazards: ['unit_swap', 'slide_motion'],
+    safety: RETURN_TO_SERVICE,
+    cautions: [REPAIR_LOCKED_OUT, SLIDE_MOTION],
+  },
+  {
+    id: 'finding-drive',
+    kind: 'finding',
+    title: "Sensor's mechanical drive loose or slipping",
+    instructions: 'Photograph the coupling or chain as found, with any slip marks, and after the repair.',
+    cause: 'sensor',
+    conclusion: 'The coupling, chain or sprockets that turn the sensor with the crankshaft are loose, slipping or have backlash: the sensor no longer follows the crank.',
+    recommendedAction: `Tighten or replace the coupling, key or set screws (or re-tension or replace the chain and sprockets), then re-align the sensor to top dead centre as the control maker describes. ${RETEST}`,
+    escalate: false,
+    hazards: ['unit_swap', 'slide_motion'],
+    safety: RETURN_TO_SERVICE,
+    cautions: [REPAIR_LOCKED_OUT, SLIDE_MOTION],
   },
   {
     id: 'finding-board',
@@ -88,10 +146,14 @@ export const CRANK_ANGLE_FINDINGS: FindingStep[] = [
     title: 'Escalate: processor board suspected',
     instructions: 'Record all readings and photos; they go with the escalation.',
     cause: 'board',
-    conclusion: 'The windings read right but the excitation or stator voltages are outside their range: the processor board that drives and reads the sensor is suspected, not the sensor or its cable.',
-    recommendedAction: 'Escalate to the service manager with the readings. Leave the press locked out and tagged as not fit for production until the board is replaced or repaired and the return-to-service checks pass.',
+    conclusion:
+      "The windings read right, but either the excitation (the board's drive) is out of range, or the excitation is in range and the output reads high (the board's reading side, or a sensor of another generation than the one chosen). The processor board is suspected.",
+    recommendedAction:
+      "Switch off control power and re-apply your lock and tag under the plant's procedure; tag the press not fit for production. Escalate to the service manager with the readings: if the excitation was in range and the output high, check the sensor generation chosen, as a sensor of another generation is the other possibility. The press stays out of production until the board is repaired or replaced and the return-to-service checks pass.",
     escalate: true,
-    safety: RETURN_TO_SERVICE,
+    hazards: ['relock', 'unit_swap'],
+    safety: RELOCK_AFTER_LIVE,
+    cautions: [REPAIR_LOCKED_OUT, RETURN_TO_SERVICE],
   },
   {
     id: 'finding-none-found',
@@ -99,9 +161,11 @@ export const CRANK_ANGLE_FINDINGS: FindingStep[] = [
     title: 'No fault found',
     instructions: 'Note how the fault showed itself and how often, so the next visit starts from there.',
     cause: 'none_found',
-    conclusion: 'Firmware, configuration, wiring, windings and voltages all pass: no fault found at this visit.',
-    recommendedAction: `Suspect an intermittent connection: with control power on, the press stopped and the clutch disengaged, flex the cable along its route (hands clear of the die area and moving parts) while watching the crank-angle display. ${RETEST}`,
+    conclusion: "Firmware, configuration, wiring, windings, voltages, the sensor's mechanical drive and the cable's insulation all pass: no fault found at this visit.",
+    recommendedAction: `Suspect an intermittent connection. Reconnect the cable at both ends; then, with only control power on (the main drive motor off and locked out, the flywheel at rest), flex the cable along its route, hands clear of the die area and moving parts, while watching the crank-angle display. Switch control power off again and re-apply your lock before any further hands-on work. ${RETEST}`,
     escalate: false,
-    safety: RETURN_TO_SERVICE,
+    hazards: ['energized_work', 'relock'],
+    safety: LIVE_WORK,
+    cautions: [RELOCK_AFTER_LIVE, RETURN_TO_SERVICE],
   },
 ];

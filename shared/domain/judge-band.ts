@@ -1,4 +1,4 @@
-import type { VoltageRange, WindingBand } from '../schemas/band-set';
+import type { RatioRange, VoltageRange, WindingBand } from '../schemas/band-set';
 import type { Verdict } from '../schemas/reading';
 import { formatPercent, formatSi } from './format-quantity';
 import type { Ohms, Percent, Volts } from './units';
@@ -105,5 +105,28 @@ export function judgeVoltage(value: Volts | 'over_range', range: VoltageRange): 
     direction: low ? 'low' : 'high',
     deviationPercent: deviation,
     reason: `${lead}, beyond the near-edge margin of ${range.nearEdgePercent} %.`,
+  };
+}
+
+/**
+ * Judges a transformation ratio (stator-pair magnitude ÷ excitation) against its band, the same
+ * way as a voltage range: in band, near the edge, or out of band low or high.
+ */
+export function judgeRatio(ratio: number, range: RatioRange): BandJudgement {
+  const span = `${range.min.toFixed(3)} to ${range.max.toFixed(3)}`;
+  const shown = ratio.toFixed(3);
+  if (ratio >= range.min - EDGE_SLACK && ratio <= range.max + EDGE_SLACK) {
+    return { verdict: 'in_band', direction: null, deviationPercent: 0, reason: `Ratio ${shown} is within ${span}.` };
+  }
+  const low = ratio < range.min;
+  const edge = low ? range.min : range.max;
+  const deviation = ((ratio - edge) / edge) * 100;
+  const lead = `Ratio ${shown} is ${formatPercent(Math.abs(deviation))} ${low ? 'below' : 'above'} the band ${span}`;
+  const near = Math.abs(deviation) <= range.nearEdgePercent + EDGE_SLACK;
+  return {
+    verdict: near ? 'near_edge' : 'out_of_band',
+    direction: low ? 'low' : 'high',
+    deviationPercent: deviation,
+    reason: `${lead}, ${near ? 'within' : 'beyond'} the near-edge margin of ${range.nearEdgePercent} %.`,
   };
 }

@@ -2,7 +2,7 @@ import type { BandSetValues, VoltageRange } from '../schemas/band-set';
 import type { Circuit, ReadingInput } from '../schemas/reading';
 import { cableLoopResistance, type CableAllowance } from './cable-allowance';
 import { formatSi } from './format-quantity';
-import { judgeResistance, judgeVoltage, type BandJudgement, type Direction } from './judge-band';
+import { judgeRatio, judgeResistance, judgeVoltage, type BandJudgement, type Direction } from './judge-band';
 import { parseEntry } from './parse-entry';
 import { analyseResolverOutput, type ResolverOutput } from './resolver-output';
 import { correctCopperResistance } from './temperature-correction';
@@ -29,6 +29,8 @@ export interface VoltageFigures {
   judged: Volts | null;
   output: ResolverOutput | null;
   range: VoltageRange;
+  /** The transformation ratio against the band set's ratio band; null without one or without excitation. */
+  ratio?: BandJudgement | null;
 }
 
 export type EntryJudgement =
@@ -121,7 +123,7 @@ function judgeVoltageEntry(input: ReadingInput, band: BandSetValues, context: En
   }
   const other = parseVolts(context.otherStatorEntered);
   if (other === 'missing') {
-    return { status: 'awaiting', reason: 'Enter both stator outputs: the pair is judged by its vector magnitude √(S1² + S2²).' };
+    return { status: 'awaiting', reason: `Enter both stator outputs: the pair is judged by its vector magnitude ${MAGNITUDE_FORMULA}.` };
   }
   if (typeof other === 'object') return { status: 'awaiting', reason: `The other stator output cannot be read yet: ${other.error}` };
   const range = band.statorOutputMagnitude;
@@ -134,9 +136,11 @@ function judgeVoltageEntry(input: ReadingInput, band: BandSetValues, context: En
   const cosine = input.circuit === 'stator_1' ? other : own;
   const output = analyseResolverOutput(sine, cosine, typeof excitation === 'number' ? excitation : undefined);
   const judged = judgeVoltage(output.magnitude, range);
-  const notes = [`Stator pair magnitude √(S1² + S2²) = ${formatSi(output.magnitude, 'ac_voltage')}; angle ${output.firstQuadrantAngle.toFixed(1)}° (first quadrant).`];
-  if (output.transformationRatio !== null) notes.push(`Transformation ratio ${output.transformationRatio.toFixed(3)}.`);
-  const figures: VoltageFigures = { kind: 'ac_voltage', measured: own, judged: output.magnitude, output, range };
+  const notes = [`Stator pair magnitude ${MAGNITUDE_FORMULA} = ${formatSi(output.magnitude, 'ac_voltage')}; angle ${output.firstQuadrantAngle.toFixed(1)}° (first quadrant).`];
+  const ratio = output.transformationRatio !== null && band.transformationRatio ? judgeRatio(output.transformationRatio, band.transformationRatio) : null;
+  if (ratio) notes.push(ratio.reason);
+  else if (output.transformationRatio !== null) notes.push(`Transformation ratio ${output.transformationRatio.toFixed(3)} (this band set has no ratio band).`);
+  const figures: VoltageFigures = { kind: 'ac_voltage', measured: own, judged: output.magnitude, output, range, ratio };
   return { status: 'judged', ...judged, reason: `Stator pair: ${judged.reason}`, figures, notes };
 }
 
@@ -147,6 +151,9 @@ function judgeVoltageEntry(input: ReadingInput, band: BandSetValues, context: En
 export function judgeEntry(input: ReadingInput, band: BandSetValues, context: EntryContext = {}): EntryJudgement {
   return input.quantity === 'resistance' ? judgeResistanceEntry(input, band) : judgeVoltageEntry(input, band, context);
 }
+
+/** The stator pair's magnitude, written with the voltages across each winding, not terminal names. */
+export const MAGNITUDE_FORMULA = '√(V(S1–S3)² + V(S2–S4)²)';
 
 export const OTHER_STATOR: Record<Exclude<Circuit, 'rotor'>, Exclude<Circuit, 'rotor'>> = {
   stator_1: 'stator_2',

@@ -1,5 +1,5 @@
 import type { ReadingInput } from '../schemas/reading';
-import { judgeMeasurements } from './judge-measurements';
+import { judgeMeasurements, outcomeForStep } from './judge-measurements';
 import { OLDER_GENERATION } from './testing/trade-fact-band-sets';
 
 // Bands from the trade (common practice, no published source): older generation rotor about 89 Ω,
@@ -41,10 +41,47 @@ describe('judgeMeasurements', () => {
     expect(judgeMeasurements(voltages('4.2', '1.3', '1.7'), OLDER_GENERATION).outcome).toBe('pass');
   });
 
-  it('gives low when the stator pair is low with good excitation', () => {
+  it('gives output_low when the stator pair is low with good excitation (the sensor or cable, not the drive)', () => {
     const result = judgeMeasurements(voltages('4.2', '0.8', '1.0'), OLDER_GENERATION);
-    expect(result.outcome).toBe('low');
+    expect(result.outcome).toBe('output_low');
     expect(result.reason).toContain('Stator pair');
+  });
+
+  it('gives excitation_out_of_range when the drive is off, whatever the output reads', () => {
+    expect(judgeMeasurements(voltages('2.9', '0.8', '1.0'), OLDER_GENERATION).outcome).toBe('excitation_out_of_range');
+    expect(judgeMeasurements(voltages('5.5', '1.3', '1.7'), OLDER_GENERATION).outcome).toBe('excitation_out_of_range');
+  });
+
+  // Resolver theory: magnitude = ratio × excitation. Excitation 4.4 V in range, pair 1.2 V and 1.6 V
+  // → magnitude √(1.44 + 2.56) = 2.0 V, in its range, but ratio 2.0 / 4.4 = 0.4545 under a 0.47 floor.
+  it('gives output_low on a low ratio even when the magnitude alone passes', () => {
+    const band = { ...OLDER_GENERATION, transformationRatio: { min: 0.47, max: 0.6, nearEdgePercent: 2 } };
+    const result = judgeMeasurements(voltages('4.4', '1.2', '1.6'), band);
+    expect(result.outcome).toBe('output_low');
+    expect(result.reason).toMatch(/Ratio 0\.455 is 3\.3 % below/);
+  });
+
+  // A meter that rolls off at the excitation frequency reads every voltage low by one factor: here
+  // 60 % of 4.2 / 1.3 / 1.7 V. Absolute volts then say "board"; the ratio (2.140 / 4.2 = 0.510) holds.
+  it('judges by the ratio alone when the meter does not cover the excitation frequency', () => {
+    const band = { ...OLDER_GENERATION, transformationRatio: { min: 0.45, max: 0.6, nearEdgePercent: 5 }, excitationFrequencyHz: 5000 };
+    const rolledOff = voltages('2.52', '0.78', '1.02');
+    expect(judgeMeasurements(rolledOff, band).outcome).toBe('excitation_out_of_range');
+    const byRatio = judgeMeasurements(rolledOff, band, { ratioOnly: true });
+    expect(byRatio.outcome).toBe('pass');
+    expect(byRatio.reason).toContain('5000 Hz');
+  });
+
+  it('cannot judge by ratio alone without a ratio band, and says what to do', () => {
+    const result = judgeMeasurements(voltages('4.2', '1.3', '1.7'), OLDER_GENERATION, { ratioOnly: true });
+    expect(result.outcome).toBeNull();
+    expect(result.reason).toContain('true-RMS');
+  });
+
+  it('maps the new outcomes onto procedures published with low / high only', () => {
+    expect(outcomeForStep(judgeMeasurements(voltages('4.2', '0.8', '1.0'), OLDER_GENERATION), ['pass', 'low', 'high'])).toBe('low');
+    expect(outcomeForStep(judgeMeasurements(voltages('5.5', '1.3', '1.7'), OLDER_GENERATION), ['pass', 'low', 'high'])).toBe('high');
+    expect(outcomeForStep(judgeMeasurements(voltages('4.2', '0.8', '1.0'), OLDER_GENERATION), ['pass', 'excitation_out_of_range', 'output_low', 'output_high'])).toBe('output_low');
   });
 });
 

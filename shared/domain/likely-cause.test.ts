@@ -30,6 +30,14 @@ describe('likely cause from readings', () => {
     expect(ranking.ruledOut.map((c) => c.cause).sort()).toEqual(['cable', 'sensor']);
   });
 
+  // Common practice, no published source: with the drive (excitation) in range, a low output is the
+  // sensor (shorted turns barely change DC resistance) or its cable, not the board.
+  it('points to the sensor or cable, not the board, when the excitation is in range and the output low', () => {
+    const ranking = rankLikelyCauses(evidenceFromReadings(judgedAll([...windings('control_end', '89', '70', '70'), ...volts('4.2', '0.8', '1.0')])));
+    expect(ranking.ranked.slice(0, 2).map((c) => c.cause).sort()).toEqual(['cable', 'sensor']);
+    expect(ranking.ranked.map((c) => c.cause)).not.toContain('board');
+  });
+
   it('points to the sensor or its cable when a winding is far off in the resistance test', () => {
     const ranking = rankLikelyCauses(evidenceFromReadings(judgedAll(windings('control_end', '89', 'OL', '70'))));
     expect(ranking.ranked.map((c) => c.cause).sort()).toEqual(['cable', 'sensor']);

@@ -20,7 +20,10 @@ function status(judged: readonly Judged[], match: (r: ReadingInput) => boolean):
 /**
  * Evidence from judged readings, following the trade's reasoning: a winding that fails at the
  * control end but passes at the sensor end is the cable; one that fails at the sensor is the
- * sensor; windings that read right while the voltages read low point to the processor board.
+ * sensor. Energized: an excitation out of range points to the board's drive; an output (magnitude
+ * or transformation ratio) out of range with the excitation in range points to the sensor or its
+ * cable, because shorted turns and rotary-transformer faults hardly change DC resistance
+ * (common practice, no published source).
  */
 export function evidenceFromReadings(judged: readonly Judged[]): CauseEvidence[] {
   const evidence: CauseEvidence[] = [];
@@ -48,16 +51,39 @@ export function evidenceFromReadings(judged: readonly Judged[]): CauseEvidence[]
     evidence.push({ cause: 'sensor', weight: -2, because: 'All three windings read right.' });
     evidence.push({ cause: 'cable', weight: -2, because: 'All three windings read right.' });
   }
-  const volts = status(judged, (r) => r.quantity === 'ac_voltage');
-  if (volts === 'low') {
-    evidence.push(
-      windingsAllPass
-        ? { cause: 'board', weight: 3, because: 'The windings read right while the voltages read low: the processor board.' }
-        : { cause: 'board', weight: 1, because: 'The voltages read low, but the windings do not all pass yet.' },
-    );
-  }
-  if (volts === 'high') {
-    evidence.push({ cause: 'board', weight: 2, because: 'A voltage reads above its range; the excitation comes from the processor board.' });
-  }
+  evidence.push(...voltageEvidence(judged, windingsAllPass));
   return evidence;
+}
+
+function voltageEvidence(judged: readonly Judged[], windingsAllPass: boolean): CauseEvidence[] {
+  const excitation = status(judged, (r) => r.quantity === 'ac_voltage' && r.circuit === 'rotor');
+  const output = status(judged, (r) => r.quantity === 'ac_voltage' && r.circuit !== 'rotor');
+  const ratio = judged.flatMap((j) =>
+    j.input.circuit !== 'rotor' && j.judgement.status === 'judged' && j.judgement.figures.kind === 'ac_voltage' && j.judgement.figures.ratio
+      ? [j.judgement.figures.ratio]
+      : [],
+  )[0];
+  const ratioStatus: Status = !ratio ? 'none' : ['in_band', 'near_edge'].includes(ratio.verdict) ? 'pass' : ratio.direction === 'low' ? 'low' : 'high';
+  if (excitation === 'low' || excitation === 'high') {
+    return [{ cause: 'board', weight: windingsAllPass ? 3 : 2, because: `The excitation reads ${excitation}: the processor board drives it.` }];
+  }
+  if (excitation !== 'pass') return [];
+  const outputLow = output === 'low' || ratioStatus === 'low';
+  const outputHigh = output === 'high' || ratioStatus === 'high';
+  if (outputLow) {
+    const because = 'The excitation is in range but the output (magnitude or ratio) reads low: the sensor or its cable, not the drive.';
+    return [
+      { cause: 'sensor', weight: 2, because },
+      { cause: 'cable', weight: 2, because },
+      { cause: 'board', weight: -1, because: 'The board drives the excitation in range.' },
+    ];
+  }
+  if (outputHigh) {
+    const because = 'The excitation is in range but the output reads high: a sensor of another generation, or the board\'s reading side.';
+    return [
+      { cause: 'sensor', weight: 1, because },
+      { cause: 'board', weight: 1, because },
+    ];
+  }
+  return output === 'pass' ? [{ cause: 'board', weight: -2, because: 'Excitation and output read right.' }] : [];
 }

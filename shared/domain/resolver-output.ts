@@ -1,7 +1,7 @@
 import type { Degrees, Volts } from './units';
 
 export interface ResolverOutput {
-  /** √(S1² + S2²): the same at every shaft angle, so this is what is judged. */
+  /** √(V(S1–S3)² + V(S2–S4)²): the same at every shaft angle, so this is what is judged. */
   magnitude: Volts;
   /** magnitude / excitation; null without an excitation reading. */
   transformationRatio: number | null;

@@ -78,6 +78,15 @@ describe('iso13855Distance — ISO 13855, detection capability ≤ 40 mm', () =>
   it('never gives less than 100 mm', () => {
     expect(iso13855Distance(0.01, 14).distance).toBe(100);
   });
+
+  // From memory of the standard's text, not checked against a copy: the intrusion term 8 × (d − 14)
+  // is not allowed below 0, so a finer device (d < 14 mm) earns no reduction. T = 0.2 s, d = 10 mm:
+  // 2000 × 0.2 = 400 mm, plus 0 (not 8 × (10 − 14) = −32) → 400 mm.
+  it('clamps the intrusion term at 0 for d < 14 mm (from memory)', () => {
+    const result = iso13855Distance(0.2, 10);
+    expect(result.distance).toBeCloseTo(400, 9);
+    expect(result.formula).toContain('+ 0.0 mm');
+  });
 });
 
 describe('hand speed', () => {

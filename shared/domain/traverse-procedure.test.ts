@@ -37,14 +37,39 @@ describe('traverseProcedure', () => {
     expect(t.required).toBeNull();
   });
 
-  it('reaches the board escalation when windings pass and voltages are low', () => {
-    const t = traverseProcedure(definition, [
-      ...UP_TO_WINDINGS,
-      answer('resistance-control-end', 'pass'),
-      answer('reconnect-for-live', 'confirmed'),
-      answer('ac-voltages', 'low'),
-    ]);
+  const UP_TO_VOLTAGES = [...UP_TO_WINDINGS, answer('resistance-control-end', 'pass'), answer('reconnect-for-live', 'confirmed')];
+
+  it('reaches the board escalation when the excitation (the board\'s drive) is out of range', () => {
+    const t = traverseProcedure(definition, [...UP_TO_VOLTAGES, answer('ac-voltages', 'excitation_out_of_range')]);
     expect(t.findings[0]).toMatchObject({ cause: 'board', escalate: true });
+  });
+
+  // Common practice, no published source: with the drive in range, a low output is the sensor
+  // (shorted turns barely change DC resistance) or the cable, not the board.
+  it('with the excitation in range and the output low, re-locks, checks the cable insulation, then suspects the sensor', () => {
+    const low = [...UP_TO_VOLTAGES, answer('ac-voltages', 'output_low')];
+    expect(traverseProcedure(definition, low).current?.id).toBe('relock-output-low');
+    const sound = traverseProcedure(definition, [...low, answer('relock-output-low', 'confirmed'), answer('cable-insulation-output', 'yes')]);
+    expect(sound.findings.map((f) => f.id)).toEqual(['finding-sensor-output']);
+    const leaky = traverseProcedure(definition, [...low, answer('relock-output-low', 'confirmed'), answer('cable-insulation-output', 'no')]);
+    expect(leaky.findings.map((f) => f.cause)).toEqual(['cable']);
+  });
+
+  it('checks the sensor drive and the cable insulation under a new lockout before "no fault found"', () => {
+    const pass = [...UP_TO_VOLTAGES, answer('ac-voltages', 'pass')];
+    expect(traverseProcedure(definition, pass).current?.id).toBe('relock-after-live');
+    const drive = [...pass, answer('relock-after-live', 'confirmed')];
+    expect(traverseProcedure(definition, drive).current?.id).toBe('sensor-drive');
+    expect(traverseProcedure(definition, [...drive, answer('sensor-drive', 'slipping_or_loose')]).findings.map((f) => f.id)).toEqual(['finding-drive']);
+    const none = traverseProcedure(definition, [...drive, answer('sensor-drive', 'sound'), answer('cable-insulation', 'yes')]);
+    expect(none.findings.map((f) => f.cause)).toEqual(['none_found']);
+  });
+
+  it('stops at an unknown firmware pairing for a decision', () => {
+    const start = [answer('press-at-rest', 'confirmed'), answer('firmware-versions', 'unknown')];
+    expect(traverseProcedure(definition, start).current?.id).toBe('firmware-unknown');
+    expect(traverseProcedure(definition, [...start, answer('firmware-unknown', 'yes')]).current?.id).toBe('lockout');
+    expect(traverseProcedure(definition, [...start, answer('firmware-unknown', 'no')]).findings[0]).toMatchObject({ cause: 'firmware', escalate: true });
   });
 
   it('uses the latest answer for a step and lists answers left off the path', () => {

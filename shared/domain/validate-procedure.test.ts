@@ -1,8 +1,11 @@
 import type { ProcedureDefinition, Step } from '../schemas/procedure';
 import { validateProcedure } from './validate-procedure';
 
-const WARN = { signalWord: 'WARNING' as const, text: "Energized. The plant's lockout procedure, local codes and licensed practice come first." };
-const DANGER = { signalWord: 'DANGER' as const, text: "Lock out. The plant's lockout procedure, local codes and licensed practice come first." };
+const WARN = { signalWord: 'WARNING' as const, text: "Energized. The plant's lockout procedure, local codes and licensed practice come first.", covers: ['energized_work' as const] };
+const DANGER = { signalWord: 'DANGER' as const, text: "Lock out. The plant's lockout procedure, local codes and licensed practice come first.", covers: ['stored_energy' as const] };
+const LIVE = { ...DANGER, covers: ['energized_work' as const] };
+const RELOCK = { signalWord: 'WARNING' as const, text: "Switch off control power and lock out again. The plant's lockout procedure, local codes and licensed practice come first.", covers: ['relock' as const] };
+const REPAIR = { signalWord: 'DANGER' as const, text: "Repair only locked out. The plant's lockout procedure, local codes and licensed practice come first.", covers: ['unit_swap' as const] };
 
 /** A small valid procedure: lockout → resistance → live work → voltages → findings. */
 function small(): ProcedureDefinition {
@@ -18,19 +21,20 @@ function small(): ProcedureDefinition {
         { value: 'high', label: 'High', next: 'bad-sensor' },
       ],
     },
-    { id: 'live', kind: 'safety_gate', gate: 'live_work', title: 'Live', instructions: 'Prepare.', safety: DANGER, confirmations: ['Ready'], outcomes: [{ value: 'confirmed', label: 'OK', next: 'volts' }] },
+    { id: 'live', kind: 'safety_gate', gate: 'live_work', title: 'Live', instructions: 'Prepare.', safety: LIVE, confirmations: ['Ready', 'The main drive stays off and locked out.'], outcomes: [{ value: 'confirmed', label: 'OK', next: 'volts' }] },
     {
       id: 'volts', kind: 'measure', title: 'Volts', instructions: 'Measure.', meterSetting: 'V~', safety: WARN,
       readings: [{ key: 'e', label: 'Excitation', quantity: 'ac_voltage', circuit: 'rotor', position: 'control_end', band: { kind: 'excitation' } }],
       outcomes: [
         { value: 'pass', label: 'Pass', next: 'none' },
-        { value: 'low', label: 'Low', next: 'bad-board' },
-        { value: 'high', label: 'High', next: 'bad-board' },
+        { value: 'excitation_out_of_range', label: 'Drive', next: 'bad-board' },
+        { value: 'output_low', label: 'Output low', next: 'bad-board' },
+        { value: 'output_high', label: 'Output high', next: 'bad-board' },
       ],
     },
-    { id: 'bad-sensor', kind: 'finding', title: 'Sensor', instructions: 'x', cause: 'sensor', conclusion: 'Sensor.', recommendedAction: 'Replace.', escalate: false },
-    { id: 'bad-board', kind: 'finding', title: 'Board', instructions: 'x', cause: 'board', conclusion: 'Board.', recommendedAction: 'Escalate.', escalate: true },
-    { id: 'none', kind: 'finding', title: 'None', instructions: 'x', cause: 'none_found', conclusion: 'None.', recommendedAction: 'Watch.', escalate: false },
+    { id: 'bad-sensor', kind: 'finding', title: 'Sensor', instructions: 'x', cause: 'sensor', conclusion: 'Sensor.', recommendedAction: 'Replace.', escalate: false, safety: REPAIR },
+    { id: 'bad-board', kind: 'finding', title: 'Board', instructions: 'x', cause: 'board', conclusion: 'Board.', recommendedAction: 'Escalate.', escalate: true, safety: RELOCK },
+    { id: 'none', kind: 'finding', title: 'None', instructions: 'x', cause: 'none_found', conclusion: 'None.', recommendedAction: 'Watch.', escalate: false, safety: RELOCK },
   ];
   return { formatVersion: 1, start: 'lock', steps };
 }
@@ -132,6 +136,62 @@ describe('validateProcedure', () => {
     const found = messages(d);
     expect(found).toContain('Step "none" is defined twice');
     expect(found).toContain('The start step "missing" does not exist.');
+  });
+
+  // Cautions wherever the work can hurt: ANSI Z535 signal words (DANGER/WARNING for injury, NOTICE for
+  // property damage); OSHA 29 CFR 1910.147(f)(1) for positioning under lockout.
+  describe('hazards and their safety messages, for any procedure', () => {
+    it('rejects a tagged step without a message covering the hazard', () => {
+      const d = edit((x) => { step(x, 'ohms').hazards = ['working_at_height']; });
+      expect(messages(d)).toContain('Step "ohms" needs a DANGER or WARNING safety message covering working at height (it is tagged so)');
+    });
+
+    it('accepts the tag once a WARNING covers it, and refuses a CAUTION for it', () => {
+      const covering = { signalWord: 'WARNING' as const, text: 'Work at height.', covers: ['working_at_height' as const] };
+      expect(messages(edit((x) => { step(x, 'ohms').hazards = ['working_at_height']; step(x, 'ohms').cautions = [covering]; }))).toEqual([]);
+      const weak = { ...covering, signalWord: 'CAUTION' as const };
+      expect(messages(edit((x) => { step(x, 'ohms').hazards = ['working_at_height']; step(x, 'ohms').cautions = [weak]; })).length).toBe(1);
+    });
+
+    it('infers a hazard from the words even when the tag is forgotten: top dead centre means slide motion', () => {
+      const d = edit((x) => { (step(x, 'bad-sensor') as { recommendedAction: string }).recommendedAction = 'Replace the sensor and align it to top dead centre.'; });
+      expect(messages(d)).toContain('Step "bad-sensor" needs a DANGER or WARNING safety message covering slide motion (it moves the crank or slide)');
+    });
+
+    it('infers unit swaps from "replace" and board handling from a wrist strap; board handling wants NOTICE', () => {
+      const d = edit((x) => { delete (step(x, 'bad-sensor') as { safety?: unknown }).safety; });
+      expect(messages(d)).toContain('Step "bad-sensor" needs a DANGER or WARNING safety message covering unit swap (it replaces or fits a part)');
+      const board = edit((x) => { step(x, 'ohms').instructions = 'Remove the board wearing a wrist strap.'; step(x, 'ohms').cautions = [{ ...WARN, covers: ['board_handling'] }]; });
+      expect(messages(board)).toContain('Step "ohms" needs a NOTICE safety message covering board handling (it handles boards)');
+    });
+
+    it('requires a re-lock message on a finding reached with control power on after the energized test', () => {
+      const d = edit((x) => { delete (step(x, 'bad-board') as { safety?: unknown }).safety; });
+      expect(messages(d)).toContain('Step "bad-board" needs a DANGER or WARNING safety message covering relock (it is reached with control power on after the energized test)');
+    });
+
+    it('refuses hands-on work after the energized test without a new lockout gate', () => {
+      const d = edit((x) => {
+        step(x, 'volts').outcomes[0]!.next = 'look';
+        x.steps.push({ id: 'look', kind: 'inspect', title: 'Look', instructions: 'Look at the coupling.', photoPrompt: 'p', outcomes: [{ value: 'ok', label: 'OK', next: 'none' }] });
+      });
+      expect(messages(d)).toContain('Step "look" is hands-on work reached with control power on after the energized test: put a lockout safety gate before it');
+    });
+
+    it('requires the live-work gate to confirm that the main drive stays locked out', () => {
+      const d = edit((x) => { (step(x, 'live') as { confirmations: string[] }).confirmations = ['Ready']; });
+      expect(messages(d)).toContain('Step "live" restores power for energized work without a confirmation that the main drive stays off and locked out');
+    });
+
+    it('treats a firmware step read before lockout as energized work', () => {
+      const d = edit((x) => {
+        x.steps.unshift({ id: 'fw', kind: 'firmware', title: 'FW', instructions: 'Read the versions.', outcomes: [
+          { value: 'compatible', label: 'c', next: 'lock' }, { value: 'incompatible', label: 'i', next: 'lock' }, { value: 'unknown', label: 'u', next: 'lock' },
+        ] });
+        x.start = 'fw';
+      });
+      expect(messages(d)).toContain('Step "fw" needs a DANGER or WARNING safety message covering energized work (it reads the control with power on)');
+    });
   });
 });
 

@@ -1,5 +1,6 @@
 import { procedureDefinitionSchema, type ProcedureDefinition } from '../schemas/procedure';
 import { energyStatesOnArrival } from './energy-state';
+import { hazardProblems } from './procedure-hazards';
 import { findCycle, indexSteps, isFinding, reachableFrom } from './procedure-graph';
 import { stepProblems } from './procedure-step-rules';
 
@@ -85,6 +86,7 @@ function energyProblems(definition: ProcedureDefinition, steps: ReturnType<typeo
       );
     }
   }
+  for (const p of hazardProblems(definition, arriving)) problems.push(problem(p.stepId, p.message));
   return problems;
 }
 

@@ -5,7 +5,7 @@ import { RETURN_TO_SERVICE } from '../data/safety-messages';
 import { visitReference } from '../format/visit-reference';
 import { circuitLabel, POSITION_LABELS, QUANTITY_LABELS, verdictLabel, VISIT_STATUS_LABELS } from '../format/labels';
 import type { BandSetValues } from '../schemas/band-set';
-import type { ProcedureDefinition, Step } from '../schemas/procedure';
+import type { ProcedureDefinition, SafetyMessage, Step } from '../schemas/procedure';
 import type { Cable, CauseCategory, Circuit, Position, Quantity, Verdict } from '../schemas/reading';
 import { CAUSE_LABELS, type ReturnToService, type VisitStatus } from '../schemas/visit';
 import type { AsLeft, RecordPathStep, RecordReading, VisitRecord } from '../schemas/visit-record';
@@ -117,13 +117,18 @@ function asLeftOf(rts: ReturnToService | null): AsLeft | null {
   return { state: 'returned_to_production', label: AS_LEFT_LABELS.returned_to_production, checks, stoppingTimeMs: rts.stoppingTimeMs ?? null };
 }
 
+// NOTICE messages are about damage to equipment (ANSI Z535), not the safety of people: not listed.
+const personalSafety = (m: SafetyMessage | undefined): SafetyMessage | null => (m && m.signalWord !== 'NOTICE' ? m : null);
+
 function safetyOf(onPath: Step[]): VisitRecord['safety'] {
   const byText = new Map<string, VisitRecord['safety'][number]>();
   for (const step of onPath) {
-    if (!step.safety) continue;
-    const known = byText.get(step.safety.text);
-    if (known) known.appliedAt.push(step.title);
-    else byText.set(step.safety.text, { signalWord: step.safety.signalWord, text: step.safety.text, appliedAt: [step.title] });
+    for (const message of [step.safety, ...(step.cautions ?? [])].map(personalSafety)) {
+      if (!message) continue;
+      const known = byText.get(message.text);
+      if (known) known.appliedAt.push(step.title);
+      else byText.set(message.text, { signalWord: message.signalWord, text: message.text, appliedAt: [step.title] });
+    }
   }
   byText.set(RETURN_TO_SERVICE.text, { signalWord: RETURN_TO_SERVICE.signalWord, text: RETURN_TO_SERVICE.text, appliedAt: ['Return to service'] });
   return [...byText.values()];

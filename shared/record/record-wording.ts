@@ -92,5 +92,5 @@ export function bandLine(bands: BandSetValues, circuit: Circuit, quantity: Quant
   }
   if (circuit === 'rotor') return `Excitation ${formatSi(bands.excitation.min, 'ac_voltage')} to ${formatSi(bands.excitation.max, 'ac_voltage')} RMS`;
   const m = bands.statorOutputMagnitude;
-  return `Stator pair √(S1² + S2²) ${formatSi(m.min, 'ac_voltage')} to ${formatSi(m.max, 'ac_voltage')} RMS`;
+  return `Stator pair √(V(S1–S3)² + V(S2–S4)²) ${formatSi(m.min, 'ac_voltage')} to ${formatSi(m.max, 'ac_voltage')} RMS`;
 }

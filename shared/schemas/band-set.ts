@@ -32,6 +32,16 @@ export const voltageRangeSchema = z
   .refine((r) => r.max > r.min, { message: 'max must be above min', path: ['max'] });
 export type VoltageRange = z.infer<typeof voltageRangeSchema>;
 
+/**
+ * A band for the transformation ratio (stator-pair magnitude ÷ excitation). It has no unit, and
+ * because both readings come from the same meter, a meter that reads low at the excitation
+ * frequency reads both low by about the same factor: the ratio still means something.
+ */
+export const ratioRangeSchema = z
+  .object({ min: positive.max(10), max: positive.max(10), nearEdgePercent: percent })
+  .refine((r) => r.max > r.min, { message: 'max must be above min', path: ['max'] });
+export type RatioRange = z.infer<typeof ratioRangeSchema>;
+
 /** The JSON stored in band_sets.values. */
 export const bandSetValuesSchema = z.object({
   label: nameText({ min: 1, max: 120, trim: false }),
@@ -44,6 +54,10 @@ export const bandSetValuesSchema = z.object({
   statorBalancePercent: percent,
   excitation: voltageRangeSchema,
   statorOutputMagnitude: voltageRangeSchema,
+  // Optional so the versions published before these existed still read; new versions set both.
+  transformationRatio: ratioRangeSchema.optional(),
+  /** The excitation frequency in hertz: the meter's AC bandwidth must cover it. */
+  excitationFrequencyHz: z.number().positive().max(1_000_000).optional(),
   invented: z.boolean(),
   note: text({ max: 500, trim: false }),
 });

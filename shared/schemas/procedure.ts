@@ -5,8 +5,53 @@ import { nameText, text as freeText } from './text';
 export const STEP_KINDS = ['safety_gate', 'check', 'choice', 'measure', 'firmware', 'inspect', 'finding'] as const;
 export type StepKind = (typeof STEP_KINDS)[number];
 
-/** ANSI Z535 signal words, most severe first. */
-export const SIGNAL_WORDS = ['DANGER', 'WARNING', 'CAUTION'] as const;
+/** How each step kind is named on every screen (one list: workspace, admin and diagram use it). */
+export const STEP_KIND_LABELS: Record<StepKind, string> = {
+  safety_gate: 'Safety gate',
+  check: 'Yes/no check',
+  choice: 'Choice',
+  measure: 'Measurement',
+  firmware: 'Firmware check',
+  inspect: 'Inspection',
+  finding: 'Finding',
+};
+
+/**
+ * ANSI Z535 signal words, most severe first. DANGER, WARNING and CAUTION are for hazards to
+ * people; NOTICE is for practices that can damage property but not hurt anyone (ANSI Z535.6).
+ */
+export const SIGNAL_WORDS = ['DANGER', 'WARNING', 'CAUTION', 'NOTICE'] as const;
+export type SignalWord = (typeof SIGNAL_WORDS)[number];
+
+/**
+ * What a step's work exposes someone (or something) to. A step tagged with a hazard must carry a
+ * safety message that covers it, at least as severe as HAZARD_SIGNAL_WORDS allows; the validator
+ * also infers some tags from the step's kind, position and words, so they cannot be forgotten.
+ */
+export const HAZARDS = [
+  'energized_work',
+  'working_at_height',
+  'slide_motion',
+  'stored_energy',
+  'unit_swap',
+  'relock',
+  'insulation_test',
+  'board_handling',
+] as const;
+export type Hazard = (typeof HAZARDS)[number];
+
+/** The signal words a message covering each hazard may use. */
+export const HAZARD_SIGNAL_WORDS: Record<Hazard, readonly SignalWord[]> = {
+  energized_work: ['DANGER', 'WARNING'],
+  working_at_height: ['DANGER', 'WARNING'],
+  slide_motion: ['DANGER', 'WARNING'],
+  stored_energy: ['DANGER', 'WARNING'],
+  unit_swap: ['DANGER', 'WARNING'],
+  relock: ['DANGER', 'WARNING'],
+  insulation_test: ['DANGER', 'WARNING'],
+  // Damage to a board, not injury: ANSI Z535 keeps the injury words for injury.
+  board_handling: ['NOTICE'],
+};
 
 /**
  * What a safety gate establishes. lockout leaves the circuits de-energized and locked;
@@ -20,7 +65,8 @@ export const REQUIRED_OUTCOMES = {
   check: ['yes', 'no'],
   firmware: ['compatible', 'incompatible', 'unknown'],
   measure_resistance: ['pass', 'imbalance', 'low', 'high'],
-  measure_ac_voltage: ['pass', 'low', 'high'],
+  // Which reading fails decides the suspect: the drive (excitation) or the sensor and cable (output).
+  measure_ac_voltage: ['pass', 'excitation_out_of_range', 'output_low', 'output_high'],
 } as const;
 
 const slug = z.string().regex(/^[a-z0-9][a-z0-9_-]{0,62}$/, 'use lower-case letters, digits, - and _');
@@ -30,6 +76,8 @@ const title = (max: number) => nameText({ min: 1, max });
 export const safetyMessageSchema = z.object({
   signalWord: z.enum(SIGNAL_WORDS),
   text: text(1200),
+  /** The hazards this message speaks to; a step's hazards must each be covered by one of its messages. */
+  covers: z.array(z.enum(HAZARDS)).max(HAZARDS.length).optional(),
 });
 export type SafetyMessage = z.infer<typeof safetyMessageSchema>;
 
@@ -52,7 +100,7 @@ export type Outcome = z.infer<typeof outcomeSchema>;
 export const stepInputSchema = z.object({
   key: slug,
   label: title(160),
-  type: z.enum(['text', 'sensor_generation', 'version', 'photo']),
+  type: z.enum(['text', 'sensor_generation', 'version', 'photo', 'yes_no']),
   required: z.boolean(),
 });
 export type StepInput = z.infer<typeof stepInputSchema>;
@@ -81,6 +129,9 @@ const stepBase = {
   title: title(160),
   instructions: text(4000),
   safety: safetyMessageSchema.optional(),
+  /** Further safety messages shown after the first, most severe first. */
+  cautions: z.array(safetyMessageSchema).max(8).optional(),
+  hazards: z.array(z.enum(HAZARDS)).max(HAZARDS.length).optional(),
   inputs: z.array(stepInputSchema).max(20).optional(),
 };
 const outcomes = z.array(outcomeSchema).min(1).max(20);

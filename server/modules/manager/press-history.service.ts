@@ -37,7 +37,7 @@ const WHERE_LABEL = { control_end: 'control end', sensor_end: 'sensor end' } as 
 function seriesLabel(kind: SeriesKind): string {
   if (kind.quantity === 'resistance') return `${kind.circuit === 'rotor' ? 'Rotor' : 'Stator'} ${CIRCUIT_LEADS[kind.circuit as 'rotor']} resistance, ${WHERE_LABEL[kind.position]}`;
   if (kind.circuit === 'rotor') return `Excitation R1–R2 voltage, ${WHERE_LABEL[kind.position]}`;
-  return `Stator output pair √(S1² + S2²), ${WHERE_LABEL[kind.position]}`;
+  return `Stator output pair √(V(S1–S3)² + V(S2–S4)²), ${WHERE_LABEL[kind.position]}`;
 }
 
 // Resistances first, then voltages; within each, rotor before the stators, control end before sensor end.

@@ -1,6 +1,6 @@
 import type { Transaction } from 'sequelize';
 import { evaluateFirmware } from '../../../shared/domain/firmware-compatibility';
-import { judgeMeasurements } from '../../../shared/domain/judge-measurements';
+import { judgeMeasurements, outcomeForStep } from '../../../shared/domain/judge-measurements';
 import { FIRMWARE_UNREADABLE, FIRMWARE_VERSION_HINT, isFirmwareVersionAnswer } from '../../../shared/schemas/firmware-version';
 import type { Step } from '../../../shared/schemas/procedure';
 import type { SessionUser } from '../../../shared/schemas/session';
@@ -51,6 +51,7 @@ async function decideOutcome(ctx: VisitContext, step: Step, input: StepAnswerInp
     const value = inputs[spec.key];
     if (spec.required && !value) throw invalid(`inputs.${spec.key}`, `${spec.label} is required.`);
     if (value && spec.type === 'version' && !isFirmwareVersionAnswer(value)) throw invalid(`inputs.${spec.key}`, `${spec.label}: ${FIRMWARE_VERSION_HINT}`);
+    if (value && spec.type === 'yes_no' && !['yes', 'no'].includes(value)) throw invalid(`inputs.${spec.key}`, `${spec.label}: answer yes or no.`);
   }
   if (inputs.sensor_generation) await pinGeneration(ctx, inputs.sensor_generation, transaction);
 
@@ -82,9 +83,12 @@ async function decideOutcome(ctx: VisitContext, step: Step, input: StepAnswerInp
       }
       const missing = missingReadings(ctx, step);
       if (missing.length) throw new AppError(409, 'readings_missing', `Enter every reading of this step first. Missing: ${missing.join('; ')}.`);
-      const judged = judgeMeasurements(stepReadings(ctx, step.id).map(toReadingInput), band);
-      if (!judged.outcome) throw new AppError(409, 'readings_unreadable', `Some readings cannot be judged yet: ${judged.reason}`);
-      return { outcome: judged.outcome, confirmedAt: null, detail: { reason: judged.reason } };
+      // A meter that cannot follow the excitation frequency reads low; then only the ratio is judged.
+      const ratioOnly = inputs.meter_covers_frequency === 'no';
+      const judged = judgeMeasurements(stepReadings(ctx, step.id).map(toReadingInput), band, { ratioOnly });
+      const outcome = outcomeForStep(judged, step.outcomes.map((o) => o.value));
+      if (!outcome) throw new AppError(409, 'readings_unreadable', `Some readings cannot be judged yet: ${judged.reason}`);
+      return { outcome, confirmedAt: null, detail: { reason: judged.reason, ...(inputs.meter_covers_frequency ? { meterCoversFrequency: inputs.meter_covers_frequency } : {}) } };
     }
     default: {
       const allowed = step.outcomes.map((o) => o.value);

@@ -2,12 +2,11 @@ import type { BandSetValues, WindingBand } from '../../schemas/band-set';
 import type { GenerationCandidate } from '../infer-generation';
 
 /*
- * TEST-ONLY CHECK VALUES, never seeded. Built from facts of the trade stated by a practitioner —
- * common practice, no published source:
+ * TEST-ONLY CHECK VALUES, never seeded. Facts of the trade — common practice, no published source:
  *   older-generation resolver: rotor about 89 Ω, each stator about 70 Ω (de-energized);
  *   newer-generation resolver: rotor about 36 Ω, each stator about 90 Ω;
  *   energized: excitation across the rotor about 4 to 4.5 V AC; the two stator outputs together
- *   2 to 2.5 V AC (read here as the vector magnitude √(S1² + S2²), which gives a ratio near the
+ *   2 to 2.5 V AC (read here as the vector magnitude √(V(S1–S3)² + V(S2–S4)²), which gives a ratio near the
  *   0.5 that resolver references call common).
  * The tolerances below are the tests' own choice ("about"), not part of the stated facts.
  */

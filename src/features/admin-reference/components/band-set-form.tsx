@@ -77,7 +77,7 @@ export function BandSetForm({ record, editable }: BandSetFormProps) {
           <WindingBandFields key={circuit} circuit={circuit} register={register} errors={errors} />
         ))}
         <VoltageRangeFields name="excitation" title="Excitation voltage (R1–R2)" register={register} errors={errors} />
-        <VoltageRangeFields name="statorOutputMagnitude" title="Stator output magnitude √(S1² + S2²)" register={register} errors={errors} />
+        <VoltageRangeFields name="statorOutputMagnitude" title="Stator output magnitude √(V(S1–S3)² + V(S2–S4)²)" register={register} errors={errors} />
         <label className="flex min-h-touch items-center gap-3 text-lg text-ink">
           <input type="checkbox" className="h-6 w-6" {...register('invented')} />
           These are invented demo values, not a manufacturer’s figures

@@ -34,7 +34,7 @@ describe('Judgement preview', () => {
     await user.type(screen.getByRole('textbox', { name: 'S2–S4 as the meter shows it' }), '1.6');
     // √(1.2² + 1.6²) = 2.0 V (a 3-4-5 right triangle), inside the invented 1.9–2.1 V range.
     expect(screen.getByText('In band')).toBeInTheDocument();
-    expect(screen.getByText(/√\(S1² \+ S2²\) = 2(\.0+)? V/)).toBeInTheDocument();
+    expect(screen.getByText(/√\(V\(S1–S3\)² \+ V\(S2–S4\)²\) = 2(\.0+)? V/)).toBeInTheDocument();
   });
 
   it('asks for complete bands before judging', async () => {

@@ -11,7 +11,7 @@ export function ResolverPanel({ output }: { output: ResolverOutput | null }) {
       {output ? (
         <dl className="mt-3 grid gap-3 text-lg sm:grid-cols-3">
           <div>
-            <dt className="text-base text-ink-muted">Vector magnitude √(S1² + S2²)</dt>
+            <dt className="text-base text-ink-muted">Vector magnitude √(V(S1–S3)² + V(S2–S4)²)</dt>
             <dd className="font-semibold text-ink">{formatSi(output.magnitude, 'ac_voltage')}</dd>
           </div>
           <div>
