@@ -41,6 +41,8 @@ export default {
         danger: { DEFAULT: '#C8102E', ink: '#FFFFFF', soft: '#FBE9EC' },
         warning: { DEFAULT: '#FF7900', ink: '#000000', soft: '#FFF1E5' },
         caution: { DEFAULT: '#FFD100', ink: '#000000', soft: '#FFF9DB' },
+        // NOTICE (property damage, not injury): white on safety blue, without the safety alert symbol.
+        notice: { DEFAULT: '#0B4F9C', ink: '#FFFFFF', soft: '#EAF1FA' },
       },
       minHeight: {
         touch: '3rem',

@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { FC_SEED } from './testing/fast-check-seed';
 import { unit } from 'mathjs';
 import { formatSi } from './format-quantity';
-import { parseEntry, type ParsedEntry } from './parse-entry';
+import { entryQuestion, parseEntry, type ParsedEntry } from './parse-entry';
 
 const valueOf = (p: ParsedEntry) => (p.ok && p.kind === 'value' ? p.value : Number.NaN);
 
@@ -51,9 +51,43 @@ describe('parseEntry', () => {
     expect(valueOf(parseEntry('4200 mV', 'ac_voltage'))).toBeCloseTo(unit('4200 mV').toNumber('V'), 12);
   });
 
-  it('refuses a decimal comma with a message that says what to type', () => {
-    const result = parseEntry('4,2', 'ac_voltage');
-    expect(result).toEqual({ ok: false, error: expect.stringContaining('type 4.2, not 4,2') });
+  // A decimal comma where it cannot be a thousands separator (one comma, not followed by exactly
+  // three digits) is read as a point, since the tablet's decimal keypad may offer only a comma.
+  it.each([
+    ['4,2', 4.2],
+    ['4,25 V', 4.25],
+    [',5', 0.5],
+    ['89,3531', 89.3531],
+  ])('reads the decimal comma in %s as %f', (entered, expected) => {
+    expect(valueOf(parseEntry(entered, 'ac_voltage'))).toBeCloseTo(expected, 9);
+  });
+
+  it.each(['1,200', '1,200 Ω', '1,2,3', '1.2,5'])('refuses %s, where the comma could be a thousands separator', (entered) => {
+    expect(parseEntry(entered, 'resistance')).toEqual({ ok: false, error: expect.stringContaining('thousands separator') });
+  });
+
+  // Plausibility bounds (common practice, no published source): handheld meters top out at tens of
+  // MΩ and are rated up to 1000 V.
+  it('refuses absurd values with a message that says what to check', () => {
+    expect(parseEntry('1e24', 'resistance')).toEqual({ ok: false, error: expect.stringMatching(/^1e24 is more than a multimeter can show.*type OL/) });
+    expect(parseEntry('2 GΩ', 'resistance').ok).toBe(false);
+    expect(valueOf(parseEntry('1 GΩ', 'resistance'))).toBe(1e9);
+    expect(parseEntry('1200 V', 'ac_voltage')).toEqual({ ok: false, error: expect.stringContaining('m is milli') });
+    expect(valueOf(parseEntry('1000 V', 'ac_voltage'))).toBe(1000);
+  });
+
+  // Common practice, no published source: a 3½-digit meter shows a lone 1 at the left for over
+  // range; no winding of this circuit reads below 1 Ω, so such a value is usually m typed for M.
+  it('asks before saving a lone 1 or a winding below 1 Ω, and nothing else', () => {
+    expect(entryQuestion('1', 'resistance')?.kind).toBe('lone_one');
+    expect(entryQuestion(' 1 ', 'ac_voltage')?.kind).toBe('lone_one');
+    expect(entryQuestion('1.2m', 'resistance')).toMatchObject({ kind: 'below_one_ohm', question: expect.stringContaining('m is milli, M is mega') });
+    expect(entryQuestion('0.4', 'resistance')?.kind).toBe('below_one_ohm');
+    expect(entryQuestion('1.0', 'resistance')).toBeNull();
+    expect(entryQuestion('1 Ω', 'resistance')).toBeNull();
+    expect(entryQuestion('0.8', 'ac_voltage')).toBeNull();
+    expect(entryQuestion('89.3', 'resistance')).toBeNull();
+    expect(entryQuestion('OL', 'resistance')).toBeNull();
   });
 
   it('refuses a voltage typed into a resistance field, and the reverse', () => {

@@ -154,19 +154,19 @@ describe('validateProcedure', () => {
     });
 
     it('infers a hazard from the words even when the tag is forgotten: top dead centre means slide motion', () => {
-      const d = edit((x) => { (step(x, 'bad-sensor') as { recommendedAction: string }).recommendedAction = 'Replace the sensor and align it to top dead centre.'; });
+      const d = edit((x) => { (x.steps.find((s) => s.id === 'bad-sensor') as { recommendedAction: string }).recommendedAction = 'Replace the sensor and align it to top dead centre.'; });
       expect(messages(d)).toContain('Step "bad-sensor" needs a DANGER or WARNING safety message covering slide motion (it moves the crank or slide)');
     });
 
     it('infers unit swaps from "replace" and board handling from a wrist strap; board handling wants NOTICE', () => {
-      const d = edit((x) => { delete (step(x, 'bad-sensor') as { safety?: unknown }).safety; });
+      const d = edit((x) => { delete x.steps.find((s) => s.id === 'bad-sensor')!.safety; });
       expect(messages(d)).toContain('Step "bad-sensor" needs a DANGER or WARNING safety message covering unit swap (it replaces or fits a part)');
       const board = edit((x) => { step(x, 'ohms').instructions = 'Remove the board wearing a wrist strap.'; step(x, 'ohms').cautions = [{ ...WARN, covers: ['board_handling'] }]; });
       expect(messages(board)).toContain('Step "ohms" needs a NOTICE safety message covering board handling (it handles boards)');
     });
 
     it('requires a re-lock message on a finding reached with control power on after the energized test', () => {
-      const d = edit((x) => { delete (step(x, 'bad-board') as { safety?: unknown }).safety; });
+      const d = edit((x) => { delete x.steps.find((s) => s.id === 'bad-board')!.safety; });
       expect(messages(d)).toContain('Step "bad-board" needs a DANGER or WARNING safety message covering relock (it is reached with control power on after the energized test)');
     });
 

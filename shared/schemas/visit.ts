@@ -75,6 +75,8 @@ export const readingSaveSchema = z.object({
   circuit: z.enum(['rotor', 'stator_1', 'stator_2']),
   position: z.enum(['control_end', 'sensor_end']),
   entered: nameText({ min: 1, minMessage: 'Type the meter reading, or OL for an open circuit', max: 40 }),
+  /** The technician answered the question asked about this entry (a lone 1, or a winding below 1 Ω). */
+  confirmed: z.boolean().optional(),
   windingTemperatureC: z.number().min(-40).max(150).optional(),
   cable: z
     .object({

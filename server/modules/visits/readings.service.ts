@@ -1,7 +1,7 @@
 import type { Transaction } from 'sequelize';
 import type { EntryJudgement } from '../../../shared/domain/judge-entry';
 import { judgeMeasurements } from '../../../shared/domain/judge-measurements';
-import { parseEntry } from '../../../shared/domain/parse-entry';
+import { entryQuestion, parseEntry } from '../../../shared/domain/parse-entry';
 import type { SessionUser } from '../../../shared/schemas/session';
 import type { ReadingSaveInput } from '../../../shared/schemas/visit';
 import { AppError } from '../../lib/errors';
@@ -55,6 +55,10 @@ export async function saveReading(user: SessionUser, visitId: number, input: Rea
 async function storeReading(user: SessionUser, visitId: number, input: ReadingSaveInput) {
   const parsed = parseEntry(input.entered, input.quantity);
   if (!parsed.ok) throw new AppError(400, 'invalid_input', 'Some fields need attention.', { entered: parsed.error });
+  const question = entryQuestion(input.entered, input.quantity);
+  if (question && input.confirmed !== true) {
+    throw new AppError(409, 'reading_unconfirmed', `Confirm this reading first: ${question.question}`, { entered: question.question });
+  }
   return Visit.sequelize!.transaction(async (transaction) => {
     const visit = await loadVisitForWrite(user, visitId, transaction);
     // A retry that waited for the row lock behind its first try finds that try's reading now.

@@ -7,12 +7,14 @@ import { Button } from '@/components/ui/button';
 import type { StepAnswerVars } from '@/api/visits';
 import type { ResilientSave } from '../../hooks/use-resilient-save';
 import { conditionsKey, draftFromReading, parseConditions, storedConditions } from '../../lib/reading-conditions';
-import { answerReason, currentReadings, outcomeLabel } from '../../lib/step-records';
+import { answerInputs, answerReason, currentReadings, outcomeLabel } from '../../lib/step-records';
 import { SaveStatusBanner } from '../save-status-banner';
 import { GenerationPicker } from './generation-picker';
 import { ReadingConditionsFields } from './reading-conditions-fields';
 import { ReadingInput } from './reading-input';
 import { ResolverPanel } from './resolver-panel';
+import { YesNoField } from './step-input-fields';
+import { inputErrorsFrom } from './field-errors';
 
 interface MeasureStepViewProps {
   visit: VisitDetail;
@@ -21,6 +23,8 @@ interface MeasureStepViewProps {
   answer: ResilientSave<StepAnswerVars, VisitDetail>;
   editable: boolean;
 }
+
+const formatFrequency = (hz: number) => (hz >= 1000 ? `${Number((hz / 1000).toPrecision(4))} kHz` : `${hz} Hz`);
 
 const specMatches = (spec: ReadingSpec) => (r: { quantity: string; circuit: string; position: string }) =>
   r.quantity === spec.quantity && r.circuit === spec.circuit && r.position === spec.position;
@@ -41,6 +45,10 @@ export function MeasureStepView({ visit, step, result, answer, editable }: Measu
   const [conditionsDraft, setConditionsDraft] = useState(() => draftFromReading(stored.find((r) => r.quantity === 'resistance')));
   const [resaveRound, setResaveRound] = useState(0);
   const [generation, setGeneration] = useState(visit.generationSuggestion?.best?.generationKey ?? '');
+  const questions = (step.inputs ?? []).filter((i) => i.type === 'yes_no');
+  const [answers, setAnswers] = useState<Record<string, string>>(() => answerInputs(result));
+  const [missing, setMissing] = useState<Record<string, string>>({});
+  const inputErrors = { ...inputErrorsFrom(answer.error, answer.isRejected), ...missing };
   const bands = visit.bandSet?.bands ?? null;
   const isResistance = step.readings.some((s) => s.quantity === 'resistance');
   const { conditions, errors } = parseConditions(conditionsDraft);
@@ -56,17 +64,30 @@ export function MeasureStepView({ visit, step, result, answer, editable }: Measu
     }
   }
 
-  const done = () =>
-    answer.save({
-      stepId: step.id,
-      body: { id: crypto.randomUUID(), ...(!visit.bandSet && generation ? { inputs: { sensor_generation: generation } } : {}) },
-    });
+  const done = () => {
+    const blank = Object.fromEntries(questions.filter((q) => q.required && !answers[q.key]).map((q) => [q.key, 'Answer this before the step is judged.']));
+    setMissing(blank);
+    if (Object.keys(blank).length > 0) return;
+    const inputs = {
+      ...Object.fromEntries(questions.filter((q) => answers[q.key]).map((q) => [q.key, answers[q.key]!])),
+      ...(!visit.bandSet && generation ? { sensor_generation: generation } : {}),
+    };
+    answer.save({ stepId: step.id, body: { id: crypto.randomUUID(), ...(Object.keys(inputs).length ? { inputs } : {}) } });
+  };
+  const frequency = bands?.excitationFrequencyHz;
 
   return (
     <div className="space-y-4">
       <p className="rounded-lg bg-surface-sunken px-4 py-3 text-lg text-ink">
         <span className="font-semibold">Meter setting: </span>
         {step.meterSetting}
+        {step.readings.some((s) => s.quantity === 'ac_voltage') && (
+          <span className="mt-1 block">
+            {frequency
+              ? `Excitation frequency for this sensor generation: ${formatFrequency(frequency)}.`
+              : 'This band set gives no excitation frequency: use a true-RMS meter and check its AC bandwidth against the control maker’s data.'}
+          </span>
+        )}
       </p>
       {!visit.bandSet && (
         <GenerationPicker suggestion={visit.generationSuggestion} bandSets={visit.availableBandSets} value={generation} onChange={setGeneration} disabled={!editable} />
@@ -99,6 +120,25 @@ export function MeasureStepView({ visit, step, result, answer, editable }: Measu
         ))}
       </div>
       {step.readings.some((s) => s.quantity === 'ac_voltage' && s.circuit !== 'rotor') && <ResolverPanel output={resolver} />}
+      {questions.map((q) => (
+        <YesNoField
+          key={q.key}
+          label={frequency ? `${q.label} (${formatFrequency(frequency)})` : q.label}
+          value={answers[q.key] ?? ''}
+          error={inputErrors[q.key]}
+          disabled={!editable}
+          onChange={(value) => {
+            setMissing((m) => Object.fromEntries(Object.entries(m).filter(([k]) => k !== q.key)));
+            setAnswers((a) => ({ ...a, [q.key]: value }));
+          }}
+        />
+      ))}
+      {questions.some((q) => q.key === 'meter_covers_frequency') && answers.meter_covers_frequency === 'no' && (
+        <p className="rounded-lg bg-surface-sunken px-4 py-3 text-base text-ink">
+          The step will be judged by the transformation ratio only: a meter that reads low at this frequency reads the excitation and the outputs low
+          by about the same factor, so their ratio still holds. Absolute volts are shown but not judged.
+        </p>
+      )}
       {result && (
         <div className="rounded-lg border border-surface-line bg-surface-raised p-4 text-lg text-ink">
           <p>

@@ -1,7 +1,7 @@
 import { FieldError } from '@/components/ui/field-error';
-import { useEffect, useEffectEvent, useId, useRef, type KeyboardEvent } from 'react';
+import { useEffect, useEffectEvent, useId, useRef, useState, type KeyboardEvent } from 'react';
 import { judgeEntry, type EntryContext, type EntryJudgement } from '@shared/domain/judge-entry';
-import { parseEntry } from '@shared/domain/parse-entry';
+import { entryQuestion, parseEntry, type EntryQuestion } from '@shared/domain/parse-entry';
 import type { BandSetValues } from '@shared/schemas/band-set';
 import type { ReadingSpec } from '@shared/schemas/procedure';
 import type { ReadingRecord } from '@shared/schemas/visit-detail';
@@ -48,6 +48,7 @@ export function ReadingInput(props: ReadingInputProps) {
   const id = useId();
   const inputRef = useRef<HTMLInputElement>(null);
   const save = useSaveReading(visitId);
+  const [asking, setAsking] = useState<{ text: string; question: EntryQuestion } | null>(null);
   const entered = draft.trim();
   const parsed = entered ? parseEntry(entered, spec.quantity) : null;
   const client: EntryJudgement | null =
@@ -57,16 +58,27 @@ export function ReadingInput(props: ReadingInputProps) {
   const error = parseError ?? serverError;
   const savedMatches = stored !== undefined && stored.entered === entered && conditionsKey(storedConditions(stored)) === conditionsKey(conditions);
 
-  const commit = (text = entered) => {
-    if (disabled || !text || !parseEntry(text, spec.quantity).ok) return;
-    if (stored && stored.entered === text && conditionsKey(storedConditions(stored)) === conditionsKey(conditions)) return;
+  /** Saves the entry, or returns the question to ask first (a lone 1, or a winding below 1 Ω). */
+  const commit = (text = entered, confirmed = false): EntryQuestion | null => {
+    if (disabled || !text || !parseEntry(text, spec.quantity).ok) return null;
+    if (stored && stored.entered === text && conditionsKey(storedConditions(stored)) === conditionsKey(conditions)) return null;
     const pending = save.isWaitingToRetry ? save.variables : undefined;
-    if (pending && pending.entered === text && conditionsKey(pending) === conditionsKey(conditions)) return;
+    if (pending && pending.entered === text && conditionsKey(pending) === conditionsKey(conditions)) return null;
+    // A value already saved was answered when it was saved.
+    const question = entryQuestion(text, spec.quantity);
+    if (question && !confirmed && stored?.entered !== text) return question;
     // A new id per value typed: retries of this value reuse it, so the server keeps one copy.
-    save.save({ id: crypto.randomUUID(), stepId, quantity: spec.quantity, circuit: spec.circuit, position: spec.position, entered: text, ...conditions });
+    save.save({ id: crypto.randomUUID(), stepId, quantity: spec.quantity, circuit: spec.circuit, position: spec.position, entered: text, ...(question ? { confirmed: true } : {}), ...conditions });
+    return null;
+  };
+  const commitOrAsk = (text = entered, confirmed = false) => {
+    const question = commit(text, confirmed);
+    setAsking(question ? { text, question } : null);
   };
 
-  const resave = useEffectEvent(() => commit());
+  const resave = useEffectEvent(() => {
+    commit();
+  });
   useEffect(() => {
     if (resaveRound > 0) resave();
   }, [resaveRound]);
@@ -74,7 +86,7 @@ export function ReadingInput(props: ReadingInputProps) {
   const onKeyDown = (event: KeyboardEvent<HTMLInputElement>) => {
     if (event.key === 'Enter') {
       event.preventDefault();
-      commit();
+      commitOrAsk();
     }
   };
 
@@ -99,8 +111,11 @@ export function ReadingInput(props: ReadingInputProps) {
           className="max-w-[14rem] text-xl font-semibold"
           value={draft}
           disabled={disabled}
-          onChange={(event) => onDraftChange(event.target.value)}
-          onBlur={() => commit()}
+          onChange={(event) => {
+            setAsking(null);
+            onDraftChange(event.target.value);
+          }}
+          onBlur={() => commitOrAsk()}
           onKeyDown={onKeyDown}
           aria-invalid={error ? true : undefined}
           aria-describedby={[error ? errorId : '', verdictId].filter(Boolean).join(' ')}
@@ -112,7 +127,7 @@ export function ReadingInput(props: ReadingInputProps) {
             onPointerDown={keepFocus}
             onClick={() => {
               onDraftChange('OL');
-              commit('OL');
+              commitOrAsk('OL');
             }}
           >
             OL
@@ -135,6 +150,21 @@ export function ReadingInput(props: ReadingInputProps) {
           </Button>
         ))}
       </div>
+      {asking && asking.text === entered && (
+        <EntryQuestionPanel
+          question={asking.question}
+          quantity={spec.quantity}
+          onOverRange={() => {
+            onDraftChange('OL');
+            commitOrAsk('OL');
+          }}
+          onConfirm={() => commitOrAsk(asking.text, true)}
+          onCorrect={() => {
+            setAsking(null);
+            inputRef.current?.focus();
+          }}
+        />
+      )}
       <FieldError id={errorId} message={error} />
       <div id={verdictId} aria-live="polite" className="space-y-2">
         <ReadingVerdict client={client} stored={savedMatches ? stored : undefined} saving={save.isSaving} hasBands={bands !== null} entered={entered} parseOk={!parseError} />
@@ -155,6 +185,43 @@ export function ReadingInput(props: ReadingInputProps) {
         </ul>
       )}
       <SaveStatusBanner save={save} what={`the reading “${save.variables?.entered ?? entered}”`} />
+    </div>
+  );
+}
+
+interface EntryQuestionPanelProps {
+  question: EntryQuestion;
+  quantity: ReadingSpec['quantity'];
+  onOverRange: () => void;
+  onConfirm: () => void;
+  onCorrect: () => void;
+}
+
+/** Asks what an ambiguous entry meant before it is saved: over range, or a prefix slip. */
+function EntryQuestionPanel({ question, quantity, onOverRange, onConfirm, onCorrect }: EntryQuestionPanelProps) {
+  const unit = quantity === 'resistance' ? 'Ω' : 'V';
+  return (
+    <div role="group" aria-label="Check this reading before it is saved" className="space-y-3 rounded-lg border-2 border-caution bg-caution-soft p-3">
+      <p className="text-lg font-medium text-ink">{question.question}</p>
+      <div className="flex flex-wrap gap-2">
+        {question.kind === 'lone_one' ? (
+          <>
+            <Button onClick={onOverRange}>Over range: save OL</Button>
+            <Button variant="secondary" onClick={onConfirm}>
+              It really reads 1 {unit}
+            </Button>
+          </>
+        ) : (
+          <>
+            <Button variant="secondary" onClick={onCorrect}>
+              Correct it
+            </Button>
+            <Button variant="secondary" onClick={onConfirm}>
+              Yes, save it as typed
+            </Button>
+          </>
+        )}
+      </div>
     </div>
   );
 }

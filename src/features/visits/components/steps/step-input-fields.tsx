@@ -23,6 +23,11 @@ export function StepInputFields({ inputs, values, errors, onChange, bandSets, re
       {inputs.map((input) => {
         const label = input.required ? input.label : `${input.label} (optional)`;
         if (input.type === 'photo') return <div key={input.key}>{renderPhotos(input.label)}</div>;
+        if (input.type === 'yes_no') {
+          return (
+            <YesNoField key={input.key} label={label} value={values[input.key] ?? ''} error={errors[input.key]} disabled={disabled} onChange={(v) => onChange(input.key, v)} />
+          );
+        }
         if (input.type === 'sensor_generation') {
           return (
             <Field key={input.key} label={label} error={errors[input.key]}>
@@ -50,5 +55,31 @@ export function StepInputFields({ inputs, values, errors, onChange, bandSets, re
         );
       })}
     </div>
+  );
+}
+
+interface YesNoFieldProps {
+  label: string;
+  value: string;
+  error: string | undefined;
+  disabled: boolean;
+  onChange: (value: 'yes' | 'no') => void;
+}
+
+/** A yes/no question as two large radio buttons; nothing is chosen until the technician answers. */
+export function YesNoField({ label, value, error, disabled, onChange }: YesNoFieldProps) {
+  return (
+    <fieldset className="space-y-2" aria-invalid={error ? true : undefined}>
+      <legend className="text-lg font-semibold text-ink">{label}</legend>
+      <div className="flex flex-wrap gap-3">
+        {(['yes', 'no'] as const).map((option) => (
+          <label key={option} className="flex min-h-touch cursor-pointer items-center gap-2 rounded-lg border-2 border-surface-edge bg-surface-raised px-4 text-lg text-ink has-[:checked]:border-accent">
+            <input type="radio" name={label} className="h-5 w-5" checked={value === option} disabled={disabled} onChange={() => onChange(option)} />
+            {option === 'yes' ? 'Yes' : 'No'}
+          </label>
+        ))}
+      </div>
+      {error && <p className="text-base font-medium text-verdict-out_of_band">{error}</p>}
+    </fieldset>
   );
 }

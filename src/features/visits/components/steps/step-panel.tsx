@@ -1,8 +1,8 @@
 import type { ReactNode } from 'react';
-import type { Step } from '@shared/schemas/procedure';
+import { STEP_KIND_LABELS, type Step } from '@shared/schemas/procedure';
 import type { VisitDetail } from '@shared/schemas/visit-detail';
 import { Banner } from '@/components/ui/banner';
-import { SafetyNotice, defersToPlant } from '@/components/ui/safety-notice';
+import { SafetyNotice, defersToPlant, signalLevel } from '@/components/ui/safety-notice';
 import { useAnswerStep } from '../../hooks/use-answer-step';
 import { currentResult, isVisitOpen, type PersonNames } from '../../lib/step-records';
 import { FindingView } from './finding-view';
@@ -11,16 +11,6 @@ import { MeasureStepView } from './measure-step';
 import { OutcomeStepView } from './outcome-step';
 import { SafetyGateStepView } from './safety-gate-step';
 import { StepHistory } from './step-history';
-
-export const STEP_KIND_LABELS: Record<Step['kind'], string> = {
-  safety_gate: 'Safety step',
-  check: 'Check',
-  choice: 'Choice',
-  measure: 'Measurement',
-  firmware: 'Firmware',
-  inspect: 'Inspection',
-  finding: 'Finding',
-};
 
 interface StepPanelProps {
   visit: VisitDetail;
@@ -53,11 +43,11 @@ export function StepPanel({ visit, step, names, onAnswered, renderPhotos }: Step
         </Banner>
       )}
       <p className="whitespace-pre-line text-lg text-ink">{step.instructions}</p>
-      {step.safety && (
-        <SafetyNotice level={step.safety.signalWord.toLowerCase() as 'danger' | 'warning' | 'caution'} defersAlready={defersToPlant(step.safety.text)}>
-          {step.safety.text}
+      {[...(step.safety ? [step.safety] : []), ...(step.cautions ?? [])].map((message) => (
+        <SafetyNotice key={message.text} level={signalLevel(message.signalWord)} defersAlready={defersToPlant(message.text)}>
+          {message.text}
         </SafetyNotice>
-      )}
+      ))}
       {/* Keyed by the answer, so a new answer from the server resets the drafts to it; a measure step
           keeps its typed readings (and any save still waiting to be retried). */}
       <StepBody key={step.kind === 'measure' ? step.id : `${step.id}-${result?.id ?? 'none'}`} {...{ visit, step, result, answer, editable: editable && !noLongerApplies, names, photos }} />
