@@ -42,6 +42,17 @@ export const ratioRangeSchema = z
   .refine((r) => r.max > r.min, { message: 'max must be above min', path: ['max'] });
 export type RatioRange = z.infer<typeof ratioRangeSchema>;
 
+const isBlank = (v: unknown) => v === undefined || v === null || v === '' || (typeof v === 'number' && Number.isNaN(v));
+
+/** A form leaves the optional ratio band and frequency blank (NaN): that means "not given". */
+export function withoutBlankOptionals<T extends { transformationRatio?: unknown; excitationFrequencyHz?: unknown }>(values: T): T {
+  const copy = { ...values };
+  const ratio = copy.transformationRatio;
+  if (isBlank(ratio) || (typeof ratio === 'object' && ratio !== null && Object.values(ratio).every(isBlank))) delete copy.transformationRatio;
+  if (isBlank(copy.excitationFrequencyHz)) delete copy.excitationFrequencyHz;
+  return copy;
+}
+
 /** The JSON stored in band_sets.values. */
 export const bandSetValuesSchema = z.object({
   label: nameText({ min: 1, max: 120, trim: false }),

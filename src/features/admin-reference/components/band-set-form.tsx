@@ -1,7 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm, useWatch, type Control, type FieldPath } from 'react-hook-form';
 import type { BandSetVersionRecord } from '@shared/schemas/admin-reference';
-import { bandSetValuesSchema, type BandSetValues } from '@shared/schemas/band-set';
+import { bandSetValuesSchema, withoutBlankOptionals, type BandSetValues } from '@shared/schemas/band-set';
 import { CIRCUITS } from '@shared/schemas/reading';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
@@ -14,6 +14,8 @@ import { JudgementPreview } from './judgement-preview';
 import { NumberField } from './number-field';
 import { VoltageRangeFields } from './voltage-range-fields';
 import { WindingBandFields } from './winding-band-fields';
+
+const resolver = zodResolver(bandSetValuesSchema, FORM_MESSAGES);
 
 /** Watches the form on its own, so typing re-renders only the preview, not every field. */
 function LivePreview({ control }: { control: Control<BandSetValues> }) {
@@ -36,7 +38,7 @@ export function BandSetForm({ record, editable }: BandSetFormProps) {
     setError,
     formState: { errors, isDirty },
     reset,
-  } = useForm<BandSetValues>({ resolver: zodResolver(bandSetValuesSchema, FORM_MESSAGES), defaultValues: record.bands, mode: 'onBlur' });
+  } = useForm<BandSetValues>({ resolver: (values, context, options) => resolver(withoutBlankOptionals(values), context, options), defaultValues: record.bands, mode: 'onBlur' });
   const num = { valueAsNumber: true } as const;
 
   const onSubmit = handleSubmit(async (bands) => {
@@ -78,6 +80,15 @@ export function BandSetForm({ record, editable }: BandSetFormProps) {
         ))}
         <VoltageRangeFields name="excitation" title="Excitation voltage (R1–R2)" register={register} errors={errors} />
         <VoltageRangeFields name="statorOutputMagnitude" title="Stator output magnitude √(V(S1–S3)² + V(S2–S4)²)" register={register} errors={errors} />
+        <fieldset className="space-y-4 rounded-lg border border-surface-line p-4">
+          <legend className="px-1 text-xl font-semibold text-ink">Transformation ratio and excitation frequency (optional)</legend>
+          <div className="grid gap-4 sm:grid-cols-3">
+            <NumberField label="Ratio lowest" unit="" error={errors.transformationRatio?.min?.message} registration={register('transformationRatio.min', num)} />
+            <NumberField label="Ratio highest" unit="" error={errors.transformationRatio?.max?.message} registration={register('transformationRatio.max', num)} />
+            <NumberField label="Ratio near-edge margin" unit="%" error={errors.transformationRatio?.nearEdgePercent?.message} registration={register('transformationRatio.nearEdgePercent', num)} />
+          </div>
+          <NumberField label="Excitation frequency" unit="Hz" hint="The meter's AC bandwidth must cover it" error={errors.excitationFrequencyHz?.message} registration={register('excitationFrequencyHz', num)} />
+        </fieldset>
         <label className="flex min-h-touch items-center gap-3 text-lg text-ink">
           <input type="checkbox" className="h-6 w-6" {...register('invented')} />
           These are invented demo values, not a manufacturer’s figures

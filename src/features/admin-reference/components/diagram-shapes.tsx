@@ -7,17 +7,25 @@ interface Box {
   h: number;
 }
 
-// One outline per kind so the diagram reads without colour: hexagon for a safety gate, plain box
-// for a check, slanted box for a choice, double box for a measurement, cut corners for firmware,
-// rounded box for an inspection and a pill (the flowchart terminal) for a finding.
+// One outline per kind so the diagram reads without colour: hexagon for a safety gate, a diamond
+// for a decision (ISO 5807): plain for a yes/no check, doubled for a choice; double box for a
+// measurement, cut corners for firmware, rounded box for an inspection and a pill (the flowchart
+// terminal) for a finding.
 export function kindOutline(kind: StepKind, { x, y, w, h }: Box, className: string) {
   const points = (pts: [number, number][]) => pts.map(([px, py]) => `${px},${py}`).join(' ');
   const c = 14;
   switch (kind) {
     case 'safety_gate':
       return <polygon className={className} points={points([[x + c, y], [x + w - c, y], [x + w, y + h / 2], [x + w - c, y + h], [x + c, y + h], [x, y + h / 2]])} />;
+    case 'check':
+      return <polygon className={className} points={points([[x + w / 2, y], [x + w, y + h / 2], [x + w / 2, y + h], [x, y + h / 2]])} />;
     case 'choice':
-      return <polygon className={className} points={points([[x + c, y], [x + w, y], [x + w - c, y + h], [x, y + h]])} />;
+      return (
+        <>
+          <polygon className={className} points={points([[x + w / 2, y], [x + w, y + h / 2], [x + w / 2, y + h], [x, y + h / 2]])} />
+          <polygon className="fill-none stroke-current" strokeWidth={1} points={points([[x + w / 2, y + 6], [x + w - 12, y + h / 2], [x + w / 2, y + h - 6], [x + 12, y + h / 2]])} />
+        </>
+      );
     case 'measure':
       return (
         <>
@@ -44,5 +52,6 @@ export const KIND_FILL: Record<StepKind, string> = {
   measure: 'fill-accent-soft',
   firmware: 'fill-surface-sunken',
   inspect: 'fill-surface-raised',
-  finding: 'fill-verdict-in_band-soft',
+  // Most findings are faults: no "good" green.
+  finding: 'fill-surface-raised',
 };
