@@ -50,7 +50,7 @@ describe('starting a visit', () => {
   it('pins the procedure version and the band set of the press generation, and starts at the first safety step', async () => {
     const res = await tech.post('/api/visits').send({ pressId, faultDisplayed: 'Resolver fault on display' });
     expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ status: 'in_progress', procedure: { key: 'crank-angle-sensor-circuit', version: 1 }, bandSet: { generation: 'test-gen', version: 1 } });
+    expect(res.body).toMatchObject({ status: 'in_progress', procedure: { key: 'crank-angle-sensor-circuit', version: 2 }, bandSet: { generation: 'test-gen', version: 1 } });
     expect(res.body.reference).toMatch(/^V-\d{6}$/);
     expect(res.body.traversal.currentStepId).toBe('press-at-rest');
   });

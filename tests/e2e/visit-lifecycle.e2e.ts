@@ -124,7 +124,7 @@ describe('a visit from the press to approval', () => {
     await tech.getByText('Sensor generation on record: demo-gen-1').waitFor();
     await tech.getByLabel('Fault as displayed').fill(FAULT);
     expect(await tech.getByLabel('Press control firmware').inputValue()).toBe('3.4');
-    expect(await tech.getByLabel('Monitor module firmware').inputValue()).toBe('1.9');
+    expect(await tech.getByLabel('Monitoring unit firmware').inputValue()).toBe('1.9');
     await checkA11y(tech, 'start a visit');
     await screenshot(tech, '03-start-visit-tablet');
     await tech.getByRole('button', { name: 'Start the visit' }).click();
