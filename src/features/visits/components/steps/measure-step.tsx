@@ -14,7 +14,7 @@ import { ReadingConditionsFields } from './reading-conditions-fields';
 import { ReadingInput } from './reading-input';
 import { ResolverPanel } from './resolver-panel';
 import { YesNoField } from './step-input-fields';
-import { inputErrorsFrom } from './field-errors';
+import { serverFieldErrors } from '@/lib/apply-server-errors';
 
 interface MeasureStepViewProps {
   visit: VisitDetail;
@@ -48,7 +48,7 @@ export function MeasureStepView({ visit, step, result, answer, editable }: Measu
   const questions = (step.inputs ?? []).filter((i) => i.type === 'yes_no');
   const [answers, setAnswers] = useState<Record<string, string>>(() => answerInputs(result));
   const [missing, setMissing] = useState<Record<string, string>>({});
-  const inputErrors = { ...inputErrorsFrom(answer.error, answer.isRejected), ...missing };
+  const inputErrors = { ...(answer.isRejected ? serverFieldErrors(answer.error, 'inputs.') : {}), ...missing };
   const bands = visit.bandSet?.bands ?? null;
   const isResistance = step.readings.some((s) => s.quantity === 'resistance');
   const { conditions, errors } = parseConditions(conditionsDraft);
