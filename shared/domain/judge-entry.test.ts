@@ -201,8 +201,9 @@ describe('judgeEntry (AC voltage) — partners, OL and the resolver figures', ()
     expect(result.figures).toMatchObject({ measured: null, judged: null });
   });
 
+  // "1,200" could be 1.2 or 1200 (a comma before exactly three digits may be a thousands separator): refused.
   it('an unreadable own entry is a field error', () => {
-    expect(judgeEntry(volts('stator_1', '1,2'), OLDER_GENERATION)).toEqual({ status: 'error', error: expect.stringContaining('point for decimals') });
+    expect(judgeEntry(volts('stator_1', '1,200'), OLDER_GENERATION)).toEqual({ status: 'error', error: expect.stringContaining('point for decimals') });
   });
 
   it('a blank partner waits, saying both outputs are needed for the vector magnitude', () => {
@@ -211,7 +212,7 @@ describe('judgeEntry (AC voltage) — partners, OL and the resolver figures', ()
   });
 
   it('a partner that cannot be parsed waits too (no NaN verdict), passing on the partner\'s error', () => {
-    const result = judgeEntry(volts('stator_1', '1.2'), OLDER_GENERATION, { otherStatorEntered: '1,8' });
+    const result = judgeEntry(volts('stator_1', '1.2'), OLDER_GENERATION, { otherStatorEntered: '1,800' });
     expect(result).toEqual({ status: 'awaiting', reason: expect.stringMatching(/other stator output cannot be read yet: .*point for decimals/) });
   });
 
@@ -239,7 +240,7 @@ describe('judgeEntry (AC voltage) — partners, OL and the resolver figures', ()
     expect(figures.output!.firstQuadrantAngle).toBeCloseTo(30, 1);
     expect(result.deviationPercent).toBeCloseTo(((Math.hypot(1.75, 3.031) - 2.5) / 2.5) * 100, 9);
     expect(result.reason).toMatch(/^Stator pair: 3\.5 V is 40\.0 % above the range 2 V to 2\.5 V/);
-    expect(result.notes).toEqual(['Stator pair magnitude √(S1² + S2²) = 3.5 V; angle 30.0° (first quadrant).', 'Transformation ratio 0.500.']);
+    expect(result.notes).toEqual(['Stator pair magnitude √(V(S1–S3)² + V(S2–S4)²) = 3.5 V; angle 30.0° (first quadrant).', 'Transformation ratio 0.500 (this band set has no ratio band).']);
   });
 
   it('entered from the cosine stator (S2), the angle is still atan2(S1, S2): S2 3.031 V with S1 1.750 V → 30.0°', () => {

@@ -150,9 +150,11 @@ describe('evidenceFromReadings — each trade rule on its own', () => {
     expect(evidence.map((e) => [e.cause, e.weight])).toEqual([['sensor', 1], ['cable', 1]]);
   });
 
-  it('voltages low without any winding readings: board 1 only (the windings do not all pass yet)', () => {
+  // The excitation comes from the board's drive; until the windings are known to read right a shorted
+  // rotor winding loading the drive stays possible, so the board gets 2, not 3.
+  it('excitation low without any winding readings: board 2 only (the windings do not all pass yet)', () => {
     const evidence = evidenceFromReadings(judgedAll(volts('2.9', '0.8', '1.1')));
-    expect(evidence).toEqual([{ cause: 'board', weight: 1, because: leads('windings do not all pass') }]);
+    expect(evidence).toEqual([{ cause: 'board', weight: 2, because: leads('excitation reads low') }]);
   });
 
   it('windings right and voltages low: board 3', () => {
@@ -160,14 +162,20 @@ describe('evidenceFromReadings — each trade rule on its own', () => {
     expect(evidence.find((e) => e.cause === 'board')).toEqual({ cause: 'board', weight: 3, because: leads('processor board') });
   });
 
-  it('a voltage above its range points at the board with weight 2 (the excitation comes from it)', () => {
+  it('an excitation above its range points at the board (the excitation comes from it): 3 with the windings right, 2 without', () => {
     const evidence = evidenceFromReadings(judgedAll([...windings('control_end', '89', '70', '70'), ...volts('6.0', '1.3', '1.7')]));
-    expect(evidence.find((e) => e.cause === 'board')).toEqual({ cause: 'board', weight: 2, because: leads('above its range') });
+    expect(evidence.find((e) => e.cause === 'board')).toEqual({ cause: 'board', weight: 3, because: leads('excitation reads high') });
     const ol = evidenceFromReadings(judgedAll(volts('OL', '1.3', '1.7')));
     expect(ol.map((e) => [e.cause, e.weight])).toEqual([['board', 2]]);
   });
 
-  it('voltages in range add no board evidence', () => {
-    expect(evidenceFromReadings(judgedAll(volts('4.2', '1.3', '1.7')))).toEqual([]);
+  it('excitation in range, output low: sensor 3 and cable 3 (more than the windings\' −2), board −1', () => {
+    const evidence = evidenceFromReadings(judgedAll(volts('4.2', '0.8', '1.0')));
+    expect(evidence.map((e) => [e.cause, e.weight])).toEqual([['sensor', 3], ['cable', 3], ['board', -1]]);
+  });
+
+  // The procedure sends "voltages in range" on to the drive and cable checks, not to the board.
+  it('excitation and output in range count against the board (board −2, nothing else)', () => {
+    expect(evidenceFromReadings(judgedAll(volts('4.2', '1.3', '1.7')))).toEqual([{ cause: 'board', weight: -2, because: leads('Excitation and output read right') }]);
   });
 });

@@ -72,9 +72,10 @@ function voltageEvidence(judged: readonly Judged[], windingsAllPass: boolean): C
   const outputHigh = output === 'high' || ratioStatus === 'high';
   if (outputLow) {
     const because = 'The excitation is in range but the output (magnitude or ratio) reads low: the sensor or its cable, not the drive.';
+    // Weighs more than "all three windings read right" (−2): DC resistance hardly sees shorted turns.
     return [
-      { cause: 'sensor', weight: 2, because },
-      { cause: 'cable', weight: 2, because },
+      { cause: 'sensor', weight: 3, because },
+      { cause: 'cable', weight: 3, because },
       { cause: 'board', weight: -1, because: 'The board drives the excitation in range.' },
     ];
   }

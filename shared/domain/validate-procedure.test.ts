@@ -250,7 +250,7 @@ describe('validateProcedure — rules of a single step', () => {
 
   it('names the outcomes required and the ones present', () => {
     const d = edit((x) => { step(x, 'volts').outcomes.pop(); });
-    expect(messages(d)).toEqual(['Step "volts" must have exactly the outcomes pass, low, high (has pass, low)']);
+    expect(messages(d)).toEqual(['Step "volts" must have exactly the outcomes pass, excitation_out_of_range, output_low, output_high (has pass, excitation_out_of_range, output_low)']);
   });
 
   it('outcomes may come in any order', () => {
@@ -312,6 +312,8 @@ describe('validateProcedure — rules of a single step', () => {
   it('accepts each reading with the band of its quantity and circuit', () => {
     const d = edit((x) => {
       measure(x, 'ohms').readings.push({ key: 's1', label: 'S1', quantity: 'resistance', circuit: 'stator_1', position: 'sensor_end', band: { kind: 'winding', circuit: 'stator_1' } });
+      // A reading at the sensor end is work at the sensor: the step then needs that caution too.
+      step(x, 'ohms').cautions = [{ signalWord: 'WARNING', text: 'Work at height.', covers: ['working_at_height'] }];
       measure(x, 'volts').readings.push({ key: 'v1', label: 'S1', quantity: 'ac_voltage', circuit: 'stator_1', position: 'control_end', band: { kind: 'stator_output' } });
     });
     expect(validateProcedure(d)).toMatchObject({ ok: true });
@@ -329,9 +331,14 @@ describe('validateProcedure — rules of a single step', () => {
   });
 
   it('an energized step may carry DANGER as well as WARNING, but not CAUTION (ANSI Z535.4 signal words)', () => {
-    expect(validateProcedure(edit((x) => { step(x, 'volts').safety = DANGER; }))).toMatchObject({ ok: true });
+    // The DANGER message must cover the energized work it warns of (LIVE is DANGER covering energized_work).
+    expect(validateProcedure(edit((x) => { step(x, 'volts').safety = LIVE; }))).toMatchObject({ ok: true });
     const caution = edit((x) => { step(x, 'volts').safety = { signalWord: 'CAUTION', text: WARN.text }; });
-    expect(messages(caution)).toEqual(['Step "volts" is an energized measurement without a DANGER or WARNING safety message']);
+    // Both rules speak: the step's own signal word, and no message covering its energized work.
+    expect(messages(caution)).toEqual([
+      'Step "volts" is an energized measurement without a DANGER or WARNING safety message',
+      'Step "volts" needs a DANGER or WARNING safety message covering energized work (it measures on energized circuits)',
+    ]);
   });
 
   it('a de-energized measure step needs no safety message of its own (its lockout gate carries it)', () => {

@@ -124,7 +124,8 @@ function safetyOf(onPath: Step[]): VisitRecord['safety'] {
   const byText = new Map<string, VisitRecord['safety'][number]>();
   for (const step of onPath) {
     for (const message of [step.safety, ...(step.cautions ?? [])].map(personalSafety)) {
-      if (!message) continue;
+      // The return-to-service warning is listed once, last, under "Return to service" (below).
+      if (!message || message.text === RETURN_TO_SERVICE.text) continue;
       const known = byText.get(message.text);
       if (known) known.appliedAt.push(step.title);
       else byText.set(message.text, { signalWord: message.signalWord, text: message.text, appliedAt: [step.title] });
