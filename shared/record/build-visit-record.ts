@@ -118,7 +118,8 @@ function asLeftOf(rts: ReturnToService | null): AsLeft | null {
 }
 
 // NOTICE messages are about damage to equipment (ANSI Z535), not the safety of people: not listed.
-const personalSafety = (m: SafetyMessage | undefined): SafetyMessage | null => (m && m.signalWord !== 'NOTICE' ? m : null);
+type PersonalMessage = SafetyMessage & { signalWord: VisitRecord['safety'][number]['signalWord'] };
+const personalSafety = (m: SafetyMessage | undefined): PersonalMessage | null => (m && m.signalWord !== 'NOTICE' ? { ...m, signalWord: m.signalWord } : null);
 
 function safetyOf(onPath: Step[]): VisitRecord['safety'] {
   const byText = new Map<string, VisitRecord['safety'][number]>();
@@ -131,7 +132,8 @@ function safetyOf(onPath: Step[]): VisitRecord['safety'] {
       else byText.set(message.text, { signalWord: message.signalWord, text: message.text, appliedAt: [step.title] });
     }
   }
-  byText.set(RETURN_TO_SERVICE.text, { signalWord: RETURN_TO_SERVICE.signalWord, text: RETURN_TO_SERVICE.text, appliedAt: ['Return to service'] });
+  const rts = personalSafety(RETURN_TO_SERVICE)!;
+  byText.set(rts.text, { signalWord: rts.signalWord, text: rts.text, appliedAt: ['Return to service'] });
   return [...byText.values()];
 }
 

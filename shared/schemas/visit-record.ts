@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { SIGNAL_WORDS, STEP_KINDS } from './procedure';
+import { STEP_KINDS } from './procedure';
 import { causeCategorySchema, circuitSchema, positionSchema, quantitySchema, verdictSchema } from './reading';
 import { visitStatusSchema } from './visit';
 
@@ -97,7 +97,8 @@ export const recordPartSchema = z.object({
   serialFitted: z.string().nullable(),
 });
 
-export const recordSafetySchema = z.object({ signalWord: z.enum(SIGNAL_WORDS), text: z.string(), appliedAt: z.array(z.string()) });
+// Only the signal words for hazards to people: NOTICE (damage to equipment) is not listed in the record.
+export const recordSafetySchema = z.object({ signalWord: z.enum(['DANGER', 'WARNING', 'CAUTION']), text: z.string(), appliedAt: z.array(z.string()) });
 
 export const recordAcknowledgementSchema = z.object({ at: iso, by: z.string().nullable() });
 

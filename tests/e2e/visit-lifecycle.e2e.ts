@@ -357,24 +357,25 @@ describe('a visit from the press to approval', () => {
     await admin.getByRole('link', { name: 'Band sets' }).click();
     await heading(admin, 'Band sets');
     await admin.getByRole('group', { name: 'Sensor generation' }).getByRole('button', { name: /Demo generation 1/ }).click();
-    await admin.getByRole('heading', { name: /Generation demo-gen-1 — version 1 in use/ }).waitFor();
-    await admin.getByRole('button', { name: 'Start version 2 from version 1' }).click();
-    await admin.getByRole('heading', { name: 'Draft version 2' }).waitFor();
+    // The invented demo bands are seeded at version 2 (version 2 added the ratio band and frequency).
+    await admin.getByRole('heading', { name: /Generation demo-gen-1 — version 2 in use/ }).waitFor();
+    await admin.getByRole('button', { name: 'Start version 3 from version 2' }).click();
+    await admin.getByRole('heading', { name: 'Draft version 3' }).waitFor();
     const rotor = admin.getByRole('group', { name: /Rotor winding/ });
     await rotor.getByLabel('Nominal (Ω)').fill('126');
     await checkA11y(admin, 'band sets: draft');
     await admin.getByRole('button', { name: 'Save draft' }).click();
     await admin.getByRole('status').filter({ hasText: 'Draft saved' }).waitFor();
-    await admin.getByRole('button', { name: 'Publish version 2' }).click();
+    await admin.getByRole('button', { name: 'Publish version 3' }).click();
     await admin.getByRole('button', { name: 'Publish now' }).click();
-    await admin.getByRole('heading', { name: /Generation demo-gen-1 — version 2 in use/ }).waitFor();
+    await admin.getByRole('heading', { name: /Generation demo-gen-1 — version 3 in use/ }).waitFor();
     expect(await admin.getByRole('group', { name: /Rotor winding/ }).getByLabel('Nominal (Ω)').inputValue()).toBe('126');
     await checkA11y(admin, 'band sets: published');
     await screenshot(admin, '14-band-sets-tablet');
 
     await admin.goto(`/review/${visitId}`);
     await heading(admin, `Visit ${reference}`);
-    await admin.getByText('Judged against Demo generation 1 (invented), version 1 (invented demo values)').waitFor();
+    await admin.getByText('Judged against Demo generation 1 (invented), version 2 (invented demo values)').waitFor();
     const readings = admin.getByRole('table', { name: /Readings of/ });
     expect(await readings.getByText(/^120 Ω ± 8 %/).count()).toBeGreaterThan(0);
     expect(await readings.getByText(/^126 Ω/).count()).toBe(0);
