@@ -117,7 +117,18 @@ const gate = (id: string, gateKind: string, next: string) => ({
   confirmations: ['Confirmed'],
   outcomes: [{ value: 'confirmed', label: 'Confirmed', next }],
 });
-const finding = (id: string) => ({ id, kind: 'finding', title: `Finding ${id}`, instructions: 'Record it.', cause: 'sensor', conclusion: 'Sensor winding fault.', recommendedAction: 'Replace the sensor.', escalate: false });
+// Replacing a part is hands-on work: the validator asks for a message covering the unit swap.
+const finding = (id: string) => ({
+  id,
+  kind: 'finding',
+  title: `Finding ${id}`,
+  instructions: 'Record it.',
+  cause: 'sensor',
+  conclusion: 'Sensor winding fault.',
+  recommendedAction: 'Replace the sensor.',
+  escalate: false,
+  safety: { signalWord: 'DANGER', text: 'Replace the sensor only with the press locked out.', covers: ['unit_swap'] },
+});
 const resistanceStep = {
   id: 'rotor-resistance',
   kind: 'measure',
