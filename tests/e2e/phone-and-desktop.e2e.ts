@@ -41,14 +41,14 @@ describe('technician on a phone (390x844 portrait)', () => {
     await checkA11y(page, 'workspace: safety gate (phone)');
     await screenshot(page, '22-workspace-gate-phone');
     await confirmGate();
-    await step('Compare firmware of the two units');
+    await step('Compare firmware of the control pair');
     await page.getByRole('button', { name: 'Check the pairing', exact: true }).click();
     await step('Lock out the press');
     await confirmGate();
     await step('Identify the sensor generation');
     await page.getByRole('button', { name: 'Read from the nameplate', exact: true }).click();
-    await step('Bus-role jumper on the monitor module');
-    await page.getByRole('button', { name: 'Follower position', exact: true }).click();
+    await step('Role setting of the monitoring unit');
+    await page.getByRole('button', { name: 'Set as the manual requires', exact: true }).click();
     await step('Circular connector of the sensor cable');
     await page.getByRole('button', { name: 'Fully coupled, pins sound', exact: true }).click();
     await step('Conductors and terminations');

@@ -124,7 +124,7 @@ describe('a visit from the press to approval', () => {
     await tech.getByText('Sensor generation on record: demo-gen-1').waitFor();
     await tech.getByLabel('Fault as displayed').fill(FAULT);
     expect(await tech.getByLabel('Press control firmware').inputValue()).toBe('3.4');
-    expect(await tech.getByLabel('Monitoring unit firmware').inputValue()).toBe('1.9');
+    expect(await tech.getByLabel('Monitor module firmware').inputValue()).toBe('1.9');
     await checkA11y(tech, 'start a visit');
     await screenshot(tech, '03-start-visit-tablet');
     await tech.getByRole('button', { name: 'Start the visit' }).click();
@@ -153,7 +153,7 @@ describe('a visit from the press to approval', () => {
     await tabTo(tech, confirm);
     await tech.keyboard.press('Enter');
 
-    await stepTitle(tech, 'Compare firmware of the two units');
+    await stepTitle(tech, 'Compare firmware of the control pair');
     await tech.getByRole('button', { name: 'Check the pairing', exact: true }).click();
     await stepTitle(tech, 'Lock out the press');
     await tech.getByRole('navigation', { name: 'Steps' }).getByText('Compatible pairing').waitFor();
@@ -163,8 +163,8 @@ describe('a visit from the press to approval', () => {
     await stepTitle(tech, 'Identify the sensor generation');
     expect(await tech.getByLabel('Sensor generation (from the nameplate) (optional)').inputValue()).toBe('demo-gen-1');
     await tech.getByRole('button', { name: 'Read from the nameplate', exact: true }).click();
-    await stepTitle(tech, 'Bus-role jumper on the monitor module');
-    await tech.getByRole('button', { name: 'Follower position', exact: true }).click();
+    await stepTitle(tech, 'Role setting of the monitoring unit');
+    await tech.getByRole('button', { name: 'Set as the manual requires', exact: true }).click();
 
     await stepTitle(tech, 'Circular connector of the sensor cable');
     const [chooser] = await Promise.all([tech.waitForEvent('filechooser'), tech.getByRole('button', { name: 'Take photo' }).first().click()]);

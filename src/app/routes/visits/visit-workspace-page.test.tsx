@@ -44,7 +44,7 @@ describe('Visit workspace: safety gate', () => {
     await user.click(confirm);
 
     // The server says what comes next: the firmware step.
-    expect(await screen.findByRole('heading', { level: 2, name: 'Compare firmware of the two units' })).toBeInTheDocument();
+    expect(await screen.findByRole('heading', { level: 2, name: 'Compare firmware of the control pair' })).toBeInTheDocument();
     const [put] = api.callsTo('PUT', '/api/visits/42/steps/press-at-rest');
     expect(put?.body).toEqual({ id: expect.stringMatching(/^[0-9a-f-]{36}$/), confirmed: true });
 
