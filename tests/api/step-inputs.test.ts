@@ -76,7 +76,7 @@ describe('firmware versions', () => {
     expect(result.answer.reason).toMatch(/press control version could not be read/);
     // "As found" keeps what it had (the press's recorded version, or nothing); never the word "unreadable".
     expect(record.controlFirmwareFound).toBe(foundBefore);
-    // The walk goes on past an unknown pairing (the procedure's "unknown" outcome leads to lockout).
-    expect(record.traversal.currentStepId).toBe('lockout');
+    // An unknown pairing stops for a decision (procedure v2) instead of going straight on to lockout.
+    expect(record.traversal.currentStepId).toBe('firmware-unknown');
   });
 });
