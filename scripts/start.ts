@@ -67,6 +67,7 @@ server.on('exit', (code) => {
 
 for (const signal of ['SIGINT', 'SIGTERM'] as const) {
   process.on(signal, () => {
+    if (stopping) return; // one Ctrl-C reaches both us and the server; stop it once
     stopping = true;
     say('stopping ...');
     server.kill('SIGTERM');

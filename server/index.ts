@@ -27,7 +27,15 @@ const server = app.listen(env.PORT, env.HOST, () => {
 });
 const stopOutbox = startOutboxWorker({ pollMs: env.OUTBOX_POLL_MS });
 
+// Ctrl-C in a terminal signals the whole process group: `npm start` forwards a SIGTERM while this process
+// has its own SIGINT already. Shut down once; a second signal during shutdown is only logged.
+let shuttingDown = false;
 async function shutdown(signal: string) {
+  if (shuttingDown) {
+    logger.info({ signal }, 'already shutting down');
+    return;
+  }
+  shuttingDown = true;
   logger.info({ signal }, 'shutting down');
   server.close();
   await stopOutbox();
