@@ -51,7 +51,8 @@ async function fill(adminUrl: string) {
             CASE WHEN s.status IN ('closed', 'approved', 'returned') THEN 'Re-terminated shield; replaced part ' || (i % 53) END,
             (random() * 240)::int, (random() * 120)::int
      FROM generate_series(1, $1) i
-     CROSS JOIN LATERAL (SELECT now() - (random() * 1095) * interval '1 day' AS started) t
+     -- i * 0 ties the draw to the row: an uncorrelated LATERAL with random() runs once for all rows.
+     CROSS JOIN LATERAL (SELECT now() - (random() * 1095 + i * 0) * interval '1 day' AS started) t
      CROSS JOIN LATERAL (SELECT CASE WHEN i % 50 = 0 THEN 'in_progress' WHEN i % 40 = 0 THEN 'closed' WHEN i % 97 = 0 THEN 'returned' ELSE 'approved' END AS status) s`,
     [VISITS],
   );
