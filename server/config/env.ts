@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isKnownTimeZone } from '../../shared/schemas/dates';
 
 const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
@@ -43,14 +44,7 @@ const envSchema = z.object({
   REPORT_TIME_ZONE: z
     .string()
     .default('UTC')
-    .refine((tz) => {
-      try {
-        new Intl.DateTimeFormat('en-US', { timeZone: tz });
-        return true;
-      } catch {
-        return false;
-      }
-    }, 'REPORT_TIME_ZONE must be an IANA time zone such as America/Chicago or UTC'),
+    .refine(isKnownTimeZone, 'REPORT_TIME_ZONE must be an IANA time zone such as America/Chicago or UTC'),
   /** How often the outbox worker looks for e-mails due to be sent, in milliseconds. */
   OUTBOX_POLL_MS: z.coerce.number().int().min(200).max(3_600_000).default(5000),
 });

@@ -50,13 +50,7 @@ export function JudgementPreview({ bands }: { bands: unknown }) {
       </h2>
       <p className="text-base text-ink-muted">Try a value against these bands before publishing. Nothing is saved.</p>
       <Field label="Reading">
-        <Select id={targetId} value={target} onChange={(e) => setTarget(e.target.value as Target)}>
-          {TARGETS.map((t) => (
-            <option key={t.value} value={t.value}>
-              {t.label}
-            </option>
-          ))}
-        </Select>
+        <Select id={targetId} value={target} onChange={(e) => setTarget(e.target.value as Target)} options={TARGETS} />
       </Field>
       <Field label={target === 'stator_pair' ? 'S1–S3 as the meter shows it' : 'Value as the meter shows it'} hint={resistance ? 'For example 98.5, 0.1 kΩ or OL' : 'For example 4.2 or 4200 mV'}>
         <TextInput value={entered} onChange={(e) => setEntered(e.target.value)} autoComplete="off" spellCheck={false} />
