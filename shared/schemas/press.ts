@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { pageQuerySchema } from './common';
+import { directorySchemas, type Timestamps } from './common';
 import { idNumber, wholeNumber } from './numbers';
 import { nameText, text } from './text';
 
@@ -28,16 +28,11 @@ export const pressInputSchema = z.object({
   notes: text({ max: 2000 }).optional(),
 });
 export type PressInput = z.infer<typeof pressInputSchema>;
-export const pressUpdateSchema = pressInputSchema.partial();
+export const { update: pressUpdateSchema, listQuery: pressListQuerySchema } = directorySchemas(pressInputSchema, { siteId: idNumber().optional(), customerId: idNumber().optional() });
 export type PressUpdate = z.infer<typeof pressUpdateSchema>;
-
-export const pressListQuerySchema = pageQuerySchema.extend({
-  siteId: idNumber().optional(),
-  customerId: idNumber().optional(),
-});
 export type PressListQuery = z.infer<typeof pressListQuerySchema>;
 
-export interface Press {
+export interface Press extends Timestamps {
   id: number;
   siteId: number;
   siteName?: string;
@@ -51,6 +46,4 @@ export interface Press {
   controlFirmware: string | null;
   monitorFirmware: string | null;
   notes: string | null;
-  createdAt: string;
-  updatedAt: string;
 }
