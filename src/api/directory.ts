@@ -10,11 +10,13 @@ import { siteKeys } from './sites';
 
 /** The three records an admin keeps in the directory, each its own REST resource. */
 export type DirectoryResource = 'customers' | 'sites' | 'presses';
+export type DirectoryRecord<R extends DirectoryResource> = Records[R];
 interface Records {
   customers: Customer;
   sites: Site;
   presses: Press;
 }
+export type DirectoryInput<R extends DirectoryResource> = Inputs[R];
 interface Inputs {
   customers: CustomerInput;
   sites: SiteInput;
