@@ -2,7 +2,7 @@ import type { BandSetValues } from '../../../shared/schemas/band-set';
 import type { BandLimits, PressHistory, PressHistoryPoint, PressHistorySeries } from '../../../shared/schemas/manager-figures';
 import { CIRCUIT_LEADS } from '../../../shared/schemas/reading';
 import { AppError } from '../../lib/errors';
-import { visitReference } from '../visits/visit-access';
+import { visitReference } from '../../../shared/format/visit-reference';
 import { findPressForHistory, findPressReadings, type HistoryRow } from './press-history.repository';
 
 type SeriesKind = Pick<PressHistorySeries, 'quantity' | 'circuit' | 'position'>;

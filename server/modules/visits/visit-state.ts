@@ -6,7 +6,7 @@ import { traverseProcedure, type Traversal } from '../../../shared/domain/traver
 import type { MeasureStep } from '../../../shared/schemas/procedure';
 import type { Circuit, ReadingInput } from '../../../shared/schemas/reading';
 import type { Reading } from './visit-work.model';
-import { bandValues, currentReadings, currentResults, type VisitContext } from './visit-context';
+import { bandValues, currentReadings, currentResults, type VisitContext } from './visit-context.service';
 
 export function toReadingInput(r: Reading): ReadingInput {
   return {
