@@ -284,7 +284,7 @@ export function configureAttachments(deps: AttachmentServiceDeps): AttachmentSer
 }
 
 function configuredService(): AttachmentService {
-  if (!configured) throw new Error('attachment storage is not configured: mount attachmentRoutes() (or call configureAttachments) first');
+  if (!configured) throw new Error('attachment storage is not configured: createApp calls configureAttachments first');
   return configured;
 }
 

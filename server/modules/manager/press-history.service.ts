@@ -72,7 +72,7 @@ export async function pressHistory(pressId: number): Promise<PressHistory> {
       visitId: r.visit_id,
       reference: visitReference(r.visit_id),
       startedAt: r.started_at.toISOString(),
-      entered: r.entry ?? '',
+      entered: r.entered ?? '',
       judgedValue: typeof judged === 'number' ? judged : null,
       isOpen: r.is_open ?? false,
       verdict: r.verdict,

@@ -13,8 +13,8 @@ export function toReadingInput(r: Reading): ReadingInput {
     quantity: r.quantity,
     circuit: r.circuit,
     position: r.position,
-    entered: r.entry,
-    ...(r.windingTempC !== null ? { windingTemperatureC: r.windingTempC } : {}),
+    entered: r.entered,
+    ...(r.windingTemperatureC !== null ? { windingTemperatureC: r.windingTemperatureC } : {}),
     ...(r.cable ? { cable: r.cable } : {}),
   };
 }

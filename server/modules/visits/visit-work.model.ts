@@ -25,10 +25,10 @@ export class Reading extends Model<InferAttributes<Reading>, InferCreationAttrib
   declare quantity: Quantity;
   declare circuit: Circuit;
   declare position: Position;
-  declare entry: string;
+  declare entered: string;
   declare valueSi: number | null;
   declare isOpen: boolean;
-  declare windingTempC: number | null;
+  declare windingTemperatureC: number | null;
   declare cable: Cable | null;
   declare verdict: Verdict | null;
   declare reason: string;
@@ -74,10 +74,13 @@ export function initVisitWorkModels(sequelize: Sequelize): void {
     {
       ...uuidId(),
       ...required(DataTypes.INTEGER, 'visitId', 'createdBy'),
-      ...required(DataTypes.TEXT, 'stepId', 'quantity', 'circuit', 'position', 'entry', 'reason'),
+      ...required(DataTypes.TEXT, 'stepId', 'quantity', 'circuit', 'position', 'reason'),
+      // The API's names; the columns keep the names they were created with.
+      entered: { type: DataTypes.TEXT, allowNull: false, field: 'entry' },
+      windingTemperatureC: { type: DataTypes.DOUBLE, allowNull: true, field: 'winding_temp_c' },
       ...required(DataTypes.BOOLEAN, 'isOpen'),
       ...required(DataTypes.JSONB, 'judgement'),
-      ...nullable(DataTypes.DOUBLE, 'valueSi', 'windingTempC'),
+      ...nullable(DataTypes.DOUBLE, 'valueSi'),
       ...nullable(DataTypes.JSONB, 'cable'),
       ...nullable(DataTypes.TEXT, 'verdict'),
       ...nullable(DataTypes.INTEGER, 'bandSetId'),
