@@ -29,8 +29,9 @@ export interface ApiErrorBody {
   error: { code: string; message: string; fields?: Record<string, string>; requestId?: string };
 }
 
-/** The two timestamps every stored record answers with (ISO 8601). */
-export interface Timestamps {
+/** What every stored directory record answers with: its id and two timestamps (ISO 8601). */
+export interface StoredRecord {
+  id: number;
   createdAt: string;
   updatedAt: string;
 }

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { directorySchemas, type Timestamps } from './common';
+import { directorySchemas, type StoredRecord } from './common';
 import { nameText, text } from './text';
 
 const optionalText = (max: number, kind = text) => kind({ max }).optional().transform((v) => (v === '' ? undefined : v));
@@ -22,8 +22,7 @@ export type CustomerInput = z.infer<typeof customerInputSchema>;
 export const { update: customerUpdateSchema, listQuery: customerListQuerySchema } = directorySchemas(customerInputSchema, {});
 export type CustomerUpdate = z.infer<typeof customerUpdateSchema>;
 
-export interface Customer extends Timestamps {
-  id: number;
+export interface Customer extends StoredRecord {
   name: string;
   contactName: string | null;
   contactEmail: string | null;

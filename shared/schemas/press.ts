@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { directorySchemas, type Timestamps } from './common';
+import { directorySchemas, type StoredRecord } from './common';
 import { idNumber, wholeNumber } from './numbers';
 import { nameText, text } from './text';
 
@@ -32,8 +32,7 @@ export const { update: pressUpdateSchema, listQuery: pressListQuerySchema } = di
 export type PressUpdate = z.infer<typeof pressUpdateSchema>;
 export type PressListQuery = z.infer<typeof pressListQuerySchema>;
 
-export interface Press extends Timestamps {
-  id: number;
+export interface Press extends StoredRecord {
   siteId: number;
   siteName?: string;
   customerId?: number;

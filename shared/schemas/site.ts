@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { directorySchemas, type Timestamps } from './common';
+import { directorySchemas, type StoredRecord } from './common';
 import { idNumber } from './numbers';
 import { nameText, text } from './text';
 
@@ -14,8 +14,7 @@ export const { update: siteUpdateSchema, listQuery: siteListQuerySchema } = dire
 export type SiteUpdate = z.infer<typeof siteUpdateSchema>;
 export type SiteListQuery = z.infer<typeof siteListQuerySchema>;
 
-export interface Site extends Timestamps {
-  id: number;
+export interface Site extends StoredRecord {
   customerId: number;
   customerName?: string;
   name: string;

@@ -20,14 +20,8 @@ export function PressForm({ press, onDone }: { press: Press | null; onDone: () =
   return (
     <RecordForm title={press ? `Edit press ${press.assetTag}` : 'Add a press'} onSubmit={onSubmit} onCancel={onDone} busy={save.isPending} error={save.error}>
       <Field label="Site" error={errors.siteId?.message} hint={sites.isPending ? 'Loading sites…' : undefined}>
-        <Select {...register('siteId')}>
+        <Select {...register('siteId')} options={sites.data?.items.map((s) => ({ value: String(s.id), label: s.customerName ? `${s.name} — ${s.customerName}` : s.name }))}>
           <option value="">Pick the site</option>
-          {sites.data?.items.map((s) => (
-            <option key={s.id} value={s.id}>
-              {s.name}
-              {s.customerName ? ` — ${s.customerName}` : ''}
-            </option>
-          ))}
         </Select>
       </Field>
       <div className="grid gap-4 md:grid-cols-3">

@@ -15,13 +15,8 @@ export function SiteForm({ site, onDone }: { site: Site | null; onDone: () => vo
   return (
     <RecordForm title={site ? `Edit ${site.name}` : 'Add a site'} onSubmit={onSubmit} onCancel={onDone} busy={save.isPending} error={save.error}>
       <Field label="Customer" error={errors.customerId?.message} hint={customers.isPending ? 'Loading customers…' : undefined}>
-        <Select {...register('customerId')}>
+        <Select {...register('customerId')} options={customers.data?.items.map((c) => ({ value: String(c.id), label: c.name }))}>
           <option value="">Pick the customer</option>
-          {customers.data?.items.map((c) => (
-            <option key={c.id} value={c.id}>
-              {c.name}
-            </option>
-          ))}
         </Select>
       </Field>
       <Field label="Site name" error={errors.name?.message}>
