@@ -27,7 +27,7 @@ export default defineConfig(({ mode }) => ({
   },
   test: {
     globals: true,
-    // The API suites share one PostgreSQL database per worker; keep workers few on 2-core machines.
+    // Each API test file copies its own PostgreSQL database from the template; keep workers few on 2-core machines.
     maxWorkers: 2,
     projects: [
       {

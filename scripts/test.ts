@@ -64,7 +64,7 @@ try {
   // The browser journeys run after the unit and API suites, as a step of their own, against a client
   // built once; asked-for projects run as asked; a file filter that names no journey skips them.
   const wantsE2e = projectsAsked.length ? projectsAsked.includes('e2e') : filters.length === 0 || filters.some((f) => f.includes('e2e'));
-  // Not under .data/: the app's sendFile refuses paths through a dot folder.
+  // A fresh folder per run in the system temp directory, removed afterwards.
   const clientDir = path.join(os.tmpdir(), `crankwise-client-${process.pid}`);
   const e2eSteps: [string, string, string[]][] = [
     ['Chromium check', 'node_modules/.bin/tsx', ['-e', "import('./scripts/lib/chromium.ts').then((m) => m.chromiumPath())"]],

@@ -18,13 +18,14 @@ import { refuseUnstorableText } from './lib/storable-body';
 import { adminRoutes } from './modules/admin/admin.routes';
 import { inviteRoutes } from './modules/admin/invites.routes';
 import { attachmentRoutes } from './modules/attachments/attachments.routes';
-import { configureAttachments } from './modules/attachments/attachments.service';
+import { configureAttachments, prepareSignature } from './modules/attachments/attachments.service';
 import { configureInvites } from './modules/admin/invite-email';
 import { inviteLinkKey } from './modules/admin/invite-token';
 import { configureMail } from './modules/emails/mail-transport';
 import { reportLinkKey } from './modules/reports/report-link';
-import { configureReports } from './modules/reports/reports.service';
-import { DiskStorage } from './modules/attachments/storage';
+import { configureReports, enqueueVisitReport } from './modules/reports/reports.service';
+import { configureVisitClose } from './modules/visits/visit-close-ports';
+import { DiskStorage } from './lib/file-storage';
 import { customerRoutes } from './modules/customers/customers.routes';
 import { emailRoutes } from './modules/emails/emails.routes';
 import { healthRoutes } from './modules/health/health.routes';
@@ -48,6 +49,7 @@ export interface CrankwiseApp {
 }
 
 export function createApp({ env, sequelize }: AppDeps): CrankwiseApp {
+  logger.level = env.LOG_LEVEL;
   initModels(sequelize);
   const sessionPool = new pg.Pool({ connectionString: env.DATABASE_URL, max: 5 });
   // An idle connection the database drops (restart, failover) is reported here; without a listener
@@ -100,6 +102,8 @@ export function createApp({ env, sequelize }: AppDeps): CrankwiseApp {
     timeZone: env.REPORT_TIME_ZONE,
     storage,
   });
+  // Closing a visit stores the signature and queues the report; visits gets both from here.
+  configureVisitClose({ prepareSignature, enqueueVisitReport });
 
   const api = express.Router();
   api.use(noStoreByDefault);

@@ -3,7 +3,7 @@ import { loadEnv } from './config/env';
 import { createSequelize } from './db/sequelize';
 import { migrate } from './db/umzug';
 import { logger } from './lib/logger';
-import { startOutboxWorker } from './modules/emails/outbox';
+import { startOutboxWorker } from './modules/emails/outbox.service';
 
 process.on('unhandledRejection', (reason) => {
   logger.error({ err: reason }, 'unhandled promise rejection');

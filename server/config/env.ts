@@ -1,4 +1,7 @@
 import { z } from 'zod';
+import { isKnownTimeZone } from '../../shared/schemas/dates';
+
+const logLevelSchema = z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']);
 
 const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
@@ -14,7 +17,7 @@ const envSchema = z.object({
     .transform((v) => (v === undefined ? undefined : v === 'true')),
   /** Reverse-proxy hops to trust for client address and https (X-Forwarded-*); 0 when served directly. */
   TRUST_PROXY: z.coerce.number().int().min(0).max(10).default(0),
-  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  LOG_LEVEL: logLevelSchema.default('info'),
   /** Failed sign-ins allowed per account per window. */
   SIGNIN_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
   /** Failed sign-ins allowed per client address per window (a whole plant may share one address). */
@@ -43,19 +46,22 @@ const envSchema = z.object({
   REPORT_TIME_ZONE: z
     .string()
     .default('UTC')
-    .refine((tz) => {
-      try {
-        new Intl.DateTimeFormat('en-US', { timeZone: tz });
-        return true;
-      } catch {
-        return false;
-      }
-    }, 'REPORT_TIME_ZONE must be an IANA time zone such as America/Chicago or UTC'),
+    .refine(isKnownTimeZone, 'REPORT_TIME_ZONE must be an IANA time zone such as America/Chicago or UTC'),
   /** How often the outbox worker looks for e-mails due to be sent, in milliseconds. */
   OUTBOX_POLL_MS: z.coerce.number().int().min(200).max(3_600_000).default(5000),
 });
 
 export type Env = z.infer<typeof envSchema>;
+
+/**
+ * The log level before `createApp` applies the validated config: the logger exists from the first
+ * import, when nothing is parsed yet. The same schema reads LOG_LEVEL; tests default to silent.
+ */
+export function startupLogLevel(source: NodeJS.ProcessEnv = process.env): z.infer<typeof logLevelSchema> {
+  const given = logLevelSchema.safeParse(source.LOG_LEVEL);
+  if (given.success) return given.data;
+  return source.NODE_ENV === 'test' ? 'silent' : 'info';
+}
 
 /** Parses the environment once; a bad value stops the process with every problem named. */
 export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {

@@ -16,7 +16,7 @@ interface ResourceDefinition<Q extends z.ZodType, C extends z.ZodType, U extends
 
 /**
  * The reference-record routes (customers, sites, presses): every signed-in role reads;
- * managers and admins create and update (DESIGN.md §2).
+ * managers and admins create and update.
  */
 export function resourceRoutes<Q extends z.ZodType, C extends z.ZodType, U extends z.ZodType>(def: ResourceDefinition<Q, C, U>): Router {
   const router = Router();

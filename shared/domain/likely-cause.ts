@@ -32,7 +32,7 @@ export function evidenceFromPath(definition: ProcedureDefinition, path: Traversa
   return evidence;
 }
 
-/** Sums the evidence per cause category; ties keep the category order of DESIGN.md. */
+/** Sums the evidence per cause category; ties keep the order of CAUSE_CATEGORIES. */
 export function rankLikelyCauses(evidence: readonly CauseEvidence[]): CauseRanking {
   const totals = new Map<CauseCategory, RankedCause>();
   for (const item of evidence) {

@@ -28,3 +28,18 @@ export interface Page<T> {
 export interface ApiErrorBody {
   error: { code: string; message: string; fields?: Record<string, string>; requestId?: string };
 }
+
+/** What every stored directory record answers with: its id and two timestamps (ISO 8601). */
+export interface StoredRecord {
+  id: number;
+  createdAt: string;
+  updatedAt: string;
+}
+
+/**
+ * The request schemas of a directory record (customers, sites, presses): the create body, the update
+ * body (any part of it) and the list query (paging, search and the record's own filters).
+ */
+export function directorySchemas<Input extends z.ZodRawShape, Filters extends z.ZodRawShape>(input: z.ZodObject<Input>, filters: Filters) {
+  return { input, update: input.partial(), listQuery: pageQuerySchema.extend(filters) };
+}

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { pageQuerySchema } from './common';
+import { directorySchemas, type StoredRecord } from './common';
 import { nameText, text } from './text';
 
 const optionalText = (max: number, kind = text) => kind({ max }).optional().transform((v) => (v === '' ? undefined : v));
@@ -19,18 +19,13 @@ export const customerInputSchema = z.object({
   notes: optionalText(2000),
 });
 export type CustomerInput = z.infer<typeof customerInputSchema>;
-export const customerUpdateSchema = customerInputSchema.partial();
+export const { update: customerUpdateSchema, listQuery: customerListQuerySchema } = directorySchemas(customerInputSchema, {});
 export type CustomerUpdate = z.infer<typeof customerUpdateSchema>;
 
-export const customerListQuerySchema = pageQuerySchema;
-
-export interface Customer {
-  id: number;
+export interface Customer extends StoredRecord {
   name: string;
   contactName: string | null;
   contactEmail: string | null;
   contactPhone: string | null;
   notes: string | null;
-  createdAt: string;
-  updatedAt: string;
 }

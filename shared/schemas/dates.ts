@@ -19,3 +19,13 @@ export const calendarDateSchema = z
   .string('Use a date such as 2026-03-31')
   .regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date such as 2026-03-31')
   .refine(isCalendarDate, 'That date does not exist on the calendar: check the month and the day');
+
+/** Whether this JavaScript runtime knows the IANA time zone (Intl throws on an unknown one). */
+export function isKnownTimeZone(tz: string): boolean {
+  try {
+    new Intl.DateTimeFormat('en', { timeZone: tz });
+    return true;
+  } catch {
+    return false;
+  }
+}

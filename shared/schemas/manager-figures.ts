@@ -5,7 +5,7 @@ import type { CauseCategory, Circuit, Position, Quantity, Verdict } from './read
 import type { VisitStatus } from './visit';
 import { timeZoneSchema } from './visit-table';
 
-// The service manager's figures (DESIGN.md §4.11) and a press's reading history.
+// The service manager's figures and a press's reading history.
 // Definitions are written out once, here, and repeated in the SQL that computes them.
 
 export const DEFAULT_REPEAT_WINDOW_DAYS = 30;

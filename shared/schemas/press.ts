@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { pageQuerySchema } from './common';
+import { directorySchemas, type StoredRecord } from './common';
 import { idNumber, wholeNumber } from './numbers';
 import { nameText, text } from './text';
 
@@ -28,17 +28,11 @@ export const pressInputSchema = z.object({
   notes: text({ max: 2000 }).optional(),
 });
 export type PressInput = z.infer<typeof pressInputSchema>;
-export const pressUpdateSchema = pressInputSchema.partial();
+export const { update: pressUpdateSchema, listQuery: pressListQuerySchema } = directorySchemas(pressInputSchema, { siteId: idNumber().optional(), customerId: idNumber().optional() });
 export type PressUpdate = z.infer<typeof pressUpdateSchema>;
-
-export const pressListQuerySchema = pageQuerySchema.extend({
-  siteId: idNumber().optional(),
-  customerId: idNumber().optional(),
-});
 export type PressListQuery = z.infer<typeof pressListQuerySchema>;
 
-export interface Press {
-  id: number;
+export interface Press extends StoredRecord {
   siteId: number;
   siteName?: string;
   customerId?: number;
@@ -51,6 +45,4 @@ export interface Press {
   controlFirmware: string | null;
   monitorFirmware: string | null;
   notes: string | null;
-  createdAt: string;
-  updatedAt: string;
 }

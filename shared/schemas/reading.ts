@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { nameText } from './text';
 
-// The words of DESIGN.md §3: one definition shared by client, server and engine.
+// The trade's words for readings: one definition shared by client, server and engine.
 export const QUANTITIES = ['resistance', 'ac_voltage'] as const;
 export const CIRCUITS = ['rotor', 'stator_1', 'stator_2'] as const;
 export const POSITIONS = ['control_end', 'sensor_end'] as const;

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { pageQuerySchema } from './common';
+import { directorySchemas, type StoredRecord } from './common';
 import { idNumber } from './numbers';
 import { nameText, text } from './text';
 
@@ -10,21 +10,14 @@ export const siteInputSchema = z.object({
   city: nameText({ max: 120 }).optional(),
 });
 export type SiteInput = z.infer<typeof siteInputSchema>;
-export const siteUpdateSchema = siteInputSchema.partial();
+export const { update: siteUpdateSchema, listQuery: siteListQuerySchema } = directorySchemas(siteInputSchema, { customerId: idNumber().optional() });
 export type SiteUpdate = z.infer<typeof siteUpdateSchema>;
-
-export const siteListQuerySchema = pageQuerySchema.extend({
-  customerId: idNumber().optional(),
-});
 export type SiteListQuery = z.infer<typeof siteListQuerySchema>;
 
-export interface Site {
-  id: number;
+export interface Site extends StoredRecord {
   customerId: number;
   customerName?: string;
   name: string;
   address: string | null;
   city: string | null;
-  createdAt: string;
-  updatedAt: string;
 }

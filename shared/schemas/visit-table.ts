@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { pageNumber, pageSize, type Page } from './common';
-import { calendarDateSchema } from './dates';
+import { calendarDateSchema, isKnownTimeZone } from './dates';
 import { idNumber } from './numbers';
 import { text } from './text';
 import { causeCategorySchema, type CauseCategory } from './reading';
@@ -22,14 +22,7 @@ export const timeZoneSchema = z
   .string()
   .max(64)
   .regex(/^[A-Za-z0-9_+\-/]+$/, 'Use a time zone name such as Europe/Berlin')
-  .refine((tz) => {
-    try {
-      new Intl.DateTimeFormat('en', { timeZone: tz });
-      return true;
-    } catch {
-      return false;
-    }
-  }, 'Unknown time zone');
+  .refine(isKnownTimeZone, 'Unknown time zone');
 
 const id = idNumber();
 /** `status=closed,returned` in the address: one parameter, comma-separated. */

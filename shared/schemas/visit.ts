@@ -7,7 +7,7 @@ export const VISIT_STATUSES = ['draft', 'in_progress', 'closed', 'approved', 're
 export const visitStatusSchema = z.enum(VISIT_STATUSES);
 export type VisitStatus = z.infer<typeof visitStatusSchema>;
 
-/** The visit status machine (DESIGN.md §3); the database enforces the same pairs with a trigger. */
+/** The visit status machine; the database enforces the same pairs with a trigger. */
 export const VISIT_TRANSITIONS: Record<VisitStatus, readonly VisitStatus[]> = {
   draft: ['in_progress'],
   in_progress: ['closed'],
@@ -100,7 +100,7 @@ export const partUsedSchema = z.object({
 });
 export type PartUsedInput = z.infer<typeof partUsedSchema>;
 
-/** The post-repair checks before the press goes back to production (DESIGN.md §1, step 5). */
+/** The post-repair checks before the press goes back to production. */
 export const returnToServiceSchema = z.object({
   faultCleared: z.literal(true, 'Confirm the fault has cleared on the control'),
   tdcAgrees: z.literal(true, 'Confirm the crank-angle display reads top dead centre with the slide at top'),

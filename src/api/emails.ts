@@ -2,16 +2,13 @@ import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query
 import type { Page } from '@shared/schemas/common';
 import type { EmailDto } from '@shared/schemas/email';
 import { apiRequest } from '@/lib/api-client';
+import { resourceKeys } from './resource';
 
 export interface EmailListFilters {
   visitId?: number;
 }
 
-export const emailKeys = {
-  all: ['emails'] as const,
-  lists: () => [...emailKeys.all, 'list'] as const,
-  list: (filters: EmailListFilters) => [...emailKeys.lists(), filters] as const,
-};
+export const emailKeys = resourceKeys<'emails', EmailListFilters>('emails');
 
 /** The outbox (GET /api/emails), e.g. the report e-mails of one visit. */
 export const emailListOptions = (filters: EmailListFilters) =>

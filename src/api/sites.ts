@@ -1,24 +1,9 @@
-import { keepPreviousData, queryOptions } from '@tanstack/react-query';
-import type { Page } from '@shared/schemas/common';
 import type { Site } from '@shared/schemas/site';
-import { apiRequest } from '@/lib/api-client';
+import { pagedResource, type PagedFilters } from './resource';
 
-export interface SiteListFilters {
-  q?: string;
-  page?: number;
-  pageSize?: number;
-  customerId?: number;
-}
+export type SiteListFilters = PagedFilters<{ customerId: number }>;
 
-export const siteKeys = {
-  all: ['sites'] as const,
-  lists: () => [...siteKeys.all, 'list'] as const,
-  list: (filters: SiteListFilters) => [...siteKeys.lists(), filters] as const,
-};
+const sites = pagedResource<Site, SiteListFilters, 'sites'>('sites');
 
-export const siteListOptions = (filters: SiteListFilters) =>
-  queryOptions({
-    queryKey: siteKeys.list(filters),
-    queryFn: ({ signal }) => apiRequest<Page<Site>>('/api/sites', { query: { ...filters }, signal }),
-    placeholderData: keepPreviousData,
-  });
+export const siteKeys = sites.keys;
+export const siteListOptions = sites.listOptions;

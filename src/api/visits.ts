@@ -3,6 +3,7 @@ import type { Page } from '@shared/schemas/common';
 import type { CloseOutInput, ReadingSaveInput, StepAnswerInput, VisitCreateInput, VisitStatus } from '@shared/schemas/visit';
 import type { ReadingRecord, VisitDetail, VisitSummary } from '@shared/schemas/visit-detail';
 import { apiRequest } from '@/lib/api-client';
+import { resourceKeys } from './resource';
 
 export interface VisitListFilters {
   mine: boolean;
@@ -12,13 +13,7 @@ export interface VisitListFilters {
 }
 
 /** Every visit query lives under 'visits': invalidating `visitKeys.all` refreshes them all. */
-export const visitKeys = {
-  all: ['visits'] as const,
-  lists: () => [...visitKeys.all, 'list'] as const,
-  list: (filters: VisitListFilters) => [...visitKeys.lists(), filters] as const,
-  details: () => [...visitKeys.all, 'detail'] as const,
-  detail: (id: number) => [...visitKeys.details(), id] as const,
-};
+export const visitKeys = resourceKeys<'visits', VisitListFilters>('visits');
 
 export const visitPath = (id: number) => `/api/visits/${id}`;
 

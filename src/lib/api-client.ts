@@ -1,7 +1,7 @@
 import type { ApiErrorBody } from '@shared/schemas/common';
 import { ApiError } from './api-error';
 
-type Query = Record<string, string | number | undefined>;
+export type Query = Record<string, string | number | undefined>;
 
 interface RequestOptions {
   method?: 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';

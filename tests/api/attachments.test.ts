@@ -8,7 +8,7 @@ import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import type { SessionUser } from '../../shared/schemas/session';
 import { Attachment } from '../../server/modules/attachments/attachments.model';
 import { createAttachmentService, storeSignature } from '../../server/modules/attachments/attachments.service';
-import { DiskStorage, type FileStorage } from '../../server/modules/attachments/storage';
+import { DiskStorage, type FileStorage } from '../../server/lib/file-storage';
 import { TEST_CAMERA_MAKE, cameraJpeg, gif, heicContainer, noisyJpeg, plainJpeg, pngWithAlpha, svg, truncatedJpeg, webp } from '../../server/modules/attachments/test-images';
 import { Visit } from '../../server/modules/visits/visits.model';
 import type { User } from '../../server/modules/users/users.model';

@@ -9,21 +9,21 @@ import { anonymous, signedInAgent, useApiApp } from '../api-app';
 import { makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
 
-// Capture what the app logs: the request logger is built from this logger when the app is made.
+// Capture what the app logs: the request logger is built from this logger when the app is made,
+// at the app's configured LOG_LEVEL.
 type Writable = { write: (line: string) => void };
 const streamSym = pino.symbols.streamSym as unknown as 'stream';
 const target = logger as unknown as Record<'stream', Writable>;
 const lines: string[] = [];
 const original = { stream: target[streamSym], level: logger.level };
 target[streamSym] = { write: (line) => void lines.push(line) };
-logger.level = 'info';
 afterAll(() => {
   target[streamSym] = original.stream;
   logger.level = original.level;
 });
 
 const db = useTestDatabase();
-const { app } = useApiApp(db, { PUBLIC_BASE_URL: 'https://service.test.example' });
+const { app } = useApiApp(db, { PUBLIC_BASE_URL: 'https://service.test.example', LOG_LEVEL: 'info' });
 let admin: supertest.Agent;
 let manager: supertest.Agent;
 let managerId: number;

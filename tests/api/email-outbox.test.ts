@@ -5,7 +5,7 @@ import { PDFParse } from 'pdf-parse';
 import { SMTPServer } from 'smtp-server';
 import supertest from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { processOutboxOnce } from '../../server/modules/emails/outbox';
+import { processOutboxOnce } from '../../server/modules/emails/outbox.service';
 import { MAX_ATTEMPTS } from '../../server/modules/emails/retry-policy';
 import { signedInAgent, useApiApp } from '../api-app';
 import { makePress, makeUser } from '../factories';

@@ -12,7 +12,7 @@ import { makeTestBandSet, signaturePng, workToResistanceStep } from '../visit-st
 // row here fails this file. Each row says what each caller gets, in this order:
 //   anonymous · technician who owns the visit · another technician · service manager · administrator
 // A number is the exact status; the routes' own refusals after the gate (409, 404 of a missing row)
-// show the caller got through it. Roles follow DESIGN.md §2; ownership lives in visit-access.ts.
+// show the caller got through it. Ownership lives in visits/visit-access.service.ts.
 
 const db = useTestDatabase();
 const { app } = useApiApp(db);

@@ -1,7 +1,7 @@
 import type supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { visitBatches } from '../../server/modules/manager/visit-table.repository';
-import { visitReference } from '../../server/modules/visits/visit-access';
+import { visitReference } from '../../shared/format/visit-reference';
 import type { VisitTableRow } from '../../shared/schemas/visit-table';
 import { signedInAgent, useApiApp } from '../api-app';
 import { makePress, makeUser } from '../factories';

@@ -78,7 +78,7 @@ export const up: Migration = async ({ context: { sequelize } }) => {
     CREATE INDEX visits_technician_status_idx ON visits (technician_id, status);
     CREATE INDEX visits_status_created_idx ON visits (status, created_at DESC);
 
-    -- The visit status machine (DESIGN.md §3), enforced for every writer.
+    -- The visit status machine, enforced for every writer.
     CREATE FUNCTION visits_check_status_change() RETURNS trigger AS $$
     BEGIN
       IF NEW.status IS DISTINCT FROM OLD.status AND NOT (

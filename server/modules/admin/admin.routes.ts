@@ -7,7 +7,7 @@ import { procedureRoutes } from './procedures';
 import { adminUserRoutes } from './admin-users.routes';
 import { outboxInviteMailer } from './invite-email';
 
-/** Everything under /api/admin is for administrators only (DESIGN.md §2): one guard in front of all of it. */
+/** Everything under /api/admin is for administrators only: one guard in front of all of it. */
 export function adminRoutes(): Router {
   const router = Router();
   router.use(requireRole('admin'));

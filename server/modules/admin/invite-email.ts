@@ -1,6 +1,6 @@
 import type { Transaction } from 'sequelize';
 import { LINK_MARK, LinkUnavailable, registerLinkRenderer } from '../emails/email-links.service';
-import { enqueueEmail } from '../emails/outbox';
+import { enqueueEmail } from '../emails/outbox.service';
 import { UserInvite } from './invite.model';
 import { configureInviteKey, hashInviteToken, inviteTokenFor, invitePath } from './invite-token';
 

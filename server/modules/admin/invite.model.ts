@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { createdAt, optional, required, serialId } from '../../db/columns';
 
 /** One invitation link; only the SHA-256 of its token and the nonce it is made from are kept. */
 export class UserInvite extends Model<InferAttributes<UserInvite>, InferCreationAttributes<UserInvite>> {
@@ -17,15 +18,14 @@ export class UserInvite extends Model<InferAttributes<UserInvite>, InferCreation
 export function initUserInvite(sequelize: Sequelize): void {
   UserInvite.init(
     {
-      id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
-      userId: { type: DataTypes.INTEGER, allowNull: false },
-      tokenHash: { type: DataTypes.TEXT, allowNull: false },
-      nonce: { type: DataTypes.TEXT, allowNull: true, defaultValue: null },
-      expiresAt: { type: DataTypes.DATE, allowNull: false },
-      usedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
-      revokedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
-      createdBy: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
-      createdAt: DataTypes.DATE,
+      ...serialId(),
+      ...required(DataTypes.INTEGER, 'userId'),
+      ...required(DataTypes.TEXT, 'tokenHash'),
+      ...required(DataTypes.DATE, 'expiresAt'),
+      ...optional(DataTypes.TEXT, 'nonce'),
+      ...optional(DataTypes.DATE, 'usedAt', 'revokedAt'),
+      ...optional(DataTypes.INTEGER, 'createdBy'),
+      ...createdAt(),
     },
     { sequelize, tableName: 'user_invites', updatedAt: false },
   );

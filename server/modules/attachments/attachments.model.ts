@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import { createdAt, optional, required, uuidId } from '../../db/columns';
 import type { User } from '../users/users.model';
 import type { Visit } from '../visits/visits.model';
 import type { ImageMimeType } from './image-processing';
@@ -27,17 +28,12 @@ export class Attachment extends Model<InferAttributes<Attachment>, InferCreation
 export function initAttachment(sequelize: Sequelize): void {
   Attachment.init(
     {
-      id: { type: DataTypes.UUID, primaryKey: true },
-      stepId: { type: DataTypes.TEXT, allowNull: true, defaultValue: null },
-      kind: { type: DataTypes.TEXT, allowNull: false },
-      caption: { type: DataTypes.TEXT, allowNull: true, defaultValue: null },
-      storageKey: { type: DataTypes.TEXT, allowNull: false },
-      thumbKey: { type: DataTypes.TEXT, allowNull: true, defaultValue: null },
-      mimeType: { type: DataTypes.TEXT, allowNull: false },
-      bytes: { type: DataTypes.INTEGER, allowNull: false },
-      width: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
-      height: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
-      createdAt: DataTypes.DATE,
+      ...uuidId(),
+      ...required(DataTypes.TEXT, 'kind', 'storageKey', 'mimeType'),
+      ...required(DataTypes.INTEGER, 'bytes'),
+      ...optional(DataTypes.TEXT, 'stepId', 'caption', 'thumbKey'),
+      ...optional(DataTypes.INTEGER, 'width', 'height'),
+      ...createdAt(),
     },
     { sequelize, tableName: 'attachments', updatedAt: false },
   );

@@ -2,8 +2,7 @@ import { z } from 'zod';
 import { idNumber } from '../../../shared/schemas/numbers';
 import { nameText, text } from '../../../shared/schemas/text';
 
-// Request and response shapes of the attachment routes. They belong in shared/schemas/ once the
-// client's photo capture uses them; they sit here while this module is the only user.
+// Request shapes of the attachment routes, as the server parses them (multipart fields and params).
 
 export const MAX_PHOTOS_PER_UPLOAD = 6;
 export const MAX_CAPTION_LENGTH = 300;

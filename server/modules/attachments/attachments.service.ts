@@ -4,12 +4,13 @@ import { DatabaseError, UniqueConstraintError, type Transaction } from 'sequeliz
 import type { SessionUser } from '../../../shared/schemas/session';
 import { AppError } from '../../lib/errors';
 import { logger } from '../../lib/logger';
-import { loadVisitForRead, loadVisitForWrite, visitReference } from '../visits/visit-access';
+import { visitReference } from '../../../shared/format/visit-reference';
+import { loadAccessibleVisit, loadWritableVisit } from '../visits/visit-access.service';
 import { processImage, type ProcessedImage } from './image-processing';
 import type { Attachment, AttachmentKind } from './attachments.model';
 import { deleteAttachment, findAttachment, findAttachmentsByIds, insertAttachments, listAttachments, type NewAttachment } from './attachments.repository';
 import { MAX_PHOTOS_PER_UPLOAD, type AttachmentDto, type AttachmentListQuery, type PhotoUploadFields } from './attachments.schema';
-import type { FileStorage, StoredFile } from './storage';
+import type { FileStorage, StoredFile } from '../../lib/file-storage';
 
 /** One photo of an upload: its bytes, or the temp file multer streamed them to. */
 export type IncomingPhoto = (
@@ -150,11 +151,11 @@ export function createAttachmentService({ storage, maxUploadBytes }: AttachmentS
   return {
     /** The access an upload needs, checked before its body is read. */
     async checkUploadAccess(user: SessionUser, visitId: number): Promise<void> {
-      await loadVisitForWrite(user, visitId);
+      await loadWritableVisit(user, visitId);
     },
 
     async list(user: SessionUser, visitId: number, q: AttachmentListQuery = {}): Promise<AttachmentDto[]> {
-      await loadVisitForRead(user, visitId);
+      await loadAccessibleVisit(user, visitId);
       return (await listAttachments(visitId, q)).map(toAttachmentDto);
     },
 
@@ -164,7 +165,7 @@ export function createAttachmentService({ storage, maxUploadBytes }: AttachmentS
      */
     async uploadPhotos(user: SessionUser, visitId: number, files: IncomingPhoto[], fields: PhotoUploadFields): Promise<{ created: boolean; items: AttachmentDto[] }> {
       // Checked before the body was read (checkUploadAccess) and again now: the visit may have closed meanwhile.
-      await loadVisitForWrite(user, visitId);
+      await loadWritableVisit(user, visitId);
       if (files.length === 0) {
         throw new AppError(400, 'no_file', `No photo arrived. Choose or take up to ${MAX_PHOTOS_PER_UPLOAD} photos and send them in the form field "photos".`);
       }
@@ -229,13 +230,13 @@ export function createAttachmentService({ storage, maxUploadBytes }: AttachmentS
 
     /** Stores a sign-off outside a close-out (its own statement). */
     async storeSignature(user: SessionUser, visitId: number, png: Buffer): Promise<AttachmentDto> {
-      await loadVisitForWrite(user, visitId);
+      await loadWritableVisit(user, visitId);
       return (await this.prepareSignature(png)).store(user, visitId);
     },
 
     /** The stored picture (`file`) or its thumbnail (`thumb`), for streaming to the browser. */
     async openFile(user: SessionUser, visitId: number, id: string, variant: 'file' | 'thumb'): Promise<StoredFile & { mimeType: string; fileName: string }> {
-      await loadVisitForRead(user, visitId);
+      await loadAccessibleVisit(user, visitId);
       const row = await findAttachment(visitId, id);
       if (!row) throw new AppError(404, 'not_found', `Attachment ${id} was not found on visit ${visitReference(visitId)}.`);
       const key = variant === 'file' ? row.storageKey : row.thumbKey;
@@ -251,7 +252,7 @@ export function createAttachmentService({ storage, maxUploadBytes }: AttachmentS
 
     /** Removes a photo and its files while the visit is open; a signature is replaced by signing again. */
     async remove(user: SessionUser, visitId: number, id: string): Promise<void> {
-      await loadVisitForWrite(user, visitId);
+      await loadWritableVisit(user, visitId);
       const row = await findAttachment(visitId, id);
       if (!row) throw new AppError(404, 'not_found', `Attachment ${id} was not found on visit ${visitReference(visitId)}.`);
       if (row.kind !== 'photo') throw new AppError(409, 'signature_kept', 'A signature cannot be deleted; the customer signs again at close-out.');
@@ -283,7 +284,7 @@ export function configureAttachments(deps: AttachmentServiceDeps): AttachmentSer
 }
 
 function configuredService(): AttachmentService {
-  if (!configured) throw new Error('attachment storage is not configured: mount attachmentRoutes() (or call configureAttachments) first');
+  if (!configured) throw new Error('attachment storage is not configured: createApp calls configureAttachments first');
   return configured;
 }
 

@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { createdAt, nullable, required, serialId } from '../../db/columns';
 
 /** One line of the audit trail: who did what, when, to which visit (none for admin actions). */
 export class AuditEvent extends Model<InferAttributes<AuditEvent>, InferCreationAttributes<AuditEvent>> {
@@ -13,12 +14,11 @@ export class AuditEvent extends Model<InferAttributes<AuditEvent>, InferCreation
 export function initAuditEvent(sequelize: Sequelize): void {
   AuditEvent.init(
     {
-      id: { type: DataTypes.BIGINT, autoIncrement: true, primaryKey: true },
-      visitId: { type: DataTypes.INTEGER, allowNull: true },
-      actorId: { type: DataTypes.INTEGER, allowNull: true },
-      action: { type: DataTypes.TEXT, allowNull: false },
-      detail: { type: DataTypes.JSONB, allowNull: false },
-      createdAt: DataTypes.DATE,
+      ...serialId(DataTypes.BIGINT),
+      ...nullable(DataTypes.INTEGER, 'visitId', 'actorId'),
+      ...required(DataTypes.TEXT, 'action'),
+      ...required(DataTypes.JSONB, 'detail'),
+      ...createdAt(),
     },
     { sequelize, tableName: 'audit_events', timestamps: true, updatedAt: false },
   );

@@ -1,29 +1,23 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import { DataTypes, type NonAttribute, type Sequelize } from 'sequelize';
+import { optional, required, serialId, SerialRow, timestamps } from '../../db/columns';
 import type { Site } from '../sites/sites.model';
 
-export class Customer extends Model<InferAttributes<Customer>, InferCreationAttributes<Customer>> {
-  declare id: CreationOptional<number>;
+export class Customer extends SerialRow<Customer> {
   declare name: string;
   declare contactName: string | null;
   declare contactEmail: string | null;
   declare contactPhone: string | null;
   declare notes: string | null;
-  declare createdAt: CreationOptional<Date>;
-  declare updatedAt: CreationOptional<Date>;
   declare sites?: NonAttribute<Site[]>;
 }
 
 export function initCustomer(sequelize: Sequelize): void {
   Customer.init(
     {
-      id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
-      name: { type: DataTypes.TEXT, allowNull: false },
-      contactName: { type: DataTypes.TEXT, allowNull: true, defaultValue: null },
-      contactEmail: { type: DataTypes.TEXT, allowNull: true, defaultValue: null },
-      contactPhone: { type: DataTypes.TEXT, allowNull: true, defaultValue: null },
-      notes: { type: DataTypes.TEXT, allowNull: true, defaultValue: null },
-      createdAt: DataTypes.DATE,
-      updatedAt: DataTypes.DATE,
+      ...serialId(),
+      ...required(DataTypes.TEXT, 'name'),
+      ...optional(DataTypes.TEXT, 'contactName', 'contactEmail', 'contactPhone', 'notes'),
+      ...timestamps(),
     },
     { sequelize, tableName: 'customers' },
   );

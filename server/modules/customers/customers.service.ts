@@ -1,8 +1,6 @@
-import type { Page, PageQuery } from '../../../shared/schemas/common';
+import type { PageQuery } from '../../../shared/schemas/common';
 import type { Customer as CustomerDto, CustomerInput, CustomerUpdate } from '../../../shared/schemas/customer';
-import { withConstraintMessages } from '../../lib/db-errors';
-import { notFound } from '../../lib/errors';
-import { toPage } from '../../lib/paging';
+import { directoryService, isoTimestamps } from '../../lib/directory-service';
 import type { Customer } from './customers.model';
 import { findCustomer, insertCustomer, listCustomers, saveCustomer } from './customers.repository';
 
@@ -14,30 +12,15 @@ export function toCustomerDto(c: Customer): CustomerDto {
     contactEmail: c.contactEmail,
     contactPhone: c.contactPhone,
     notes: c.notes,
-    createdAt: c.createdAt.toISOString(),
-    updatedAt: c.updatedAt.toISOString(),
+    ...isoTimestamps(c),
   };
 }
 
-const DUPLICATE = 'A customer with that name already exists. Search for it instead of adding it again.';
+const customers = directoryService<Customer, CustomerDto, PageQuery, CustomerInput, CustomerUpdate>({
+  what: 'Customer',
+  repository: { list: listCustomers, find: findCustomer, insert: insertCustomer, save: saveCustomer },
+  toDto: toCustomerDto,
+  messages: { unique: 'A customer with that name already exists. Search for it instead of adding it again.' },
+});
 
-export async function searchCustomers(q: PageQuery): Promise<Page<CustomerDto>> {
-  const { rows, count } = await listCustomers(q);
-  return toPage(rows.map(toCustomerDto), count, q);
-}
-
-export async function getCustomer(id: number): Promise<CustomerDto> {
-  const customer = await findCustomer(id);
-  if (!customer) throw notFound(`Customer ${id}`);
-  return toCustomerDto(customer);
-}
-
-export async function createCustomer(input: CustomerInput): Promise<CustomerDto> {
-  return toCustomerDto(await withConstraintMessages(() => insertCustomer(input), { unique: DUPLICATE }));
-}
-
-export async function updateCustomer(id: number, input: CustomerUpdate): Promise<CustomerDto> {
-  const customer = await findCustomer(id);
-  if (!customer) throw notFound(`Customer ${id}`);
-  return toCustomerDto(await withConstraintMessages(() => saveCustomer(customer, input), { unique: DUPLICATE }));
-}
+export const { search: searchCustomers, get: getCustomer, create: createCustomer, update: updateCustomer } = customers;

@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import { createdAt, nullable, optional, required, serialId, SerialRow, timestamps, withDefault } from '../../db/columns';
 import { EMAIL_STATUSES, type EmailStatus } from '../../../shared/schemas/email';
 
 export const LINK_KINDS = ['invite', 'report'] as const;
@@ -7,8 +8,7 @@ export type LinkKind = (typeof LINK_KINDS)[number];
 export { EMAIL_STATUSES, type EmailStatus };
 
 /** One message in the outbox: queued → sending → sent, or back to queued with a later try, or failed. */
-export class Email extends Model<InferAttributes<Email>, InferCreationAttributes<Email>> {
-  declare id: CreationOptional<number>;
+export class Email extends SerialRow<Email> {
   declare visitId: number | null;
   declare kind: string;
   declare toAddress: string;
@@ -25,8 +25,6 @@ export class Email extends Model<InferAttributes<Email>, InferCreationAttributes
   declare sentAt: CreationOptional<Date | null>;
   declare messageId: CreationOptional<string | null>;
   declare createdBy: number | null;
-  declare createdAt: CreationOptional<Date>;
-  declare updatedAt: CreationOptional<Date>;
   declare attachments?: NonAttribute<EmailAttachment[]>;
 }
 
@@ -43,35 +41,26 @@ export class EmailAttachment extends Model<InferAttributes<EmailAttachment>, Inf
 export function initEmailModels(sequelize: Sequelize): void {
   Email.init(
     {
-      id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
-      visitId: { type: DataTypes.INTEGER, allowNull: true },
-      kind: { type: DataTypes.TEXT, allowNull: false },
-      toAddress: { type: DataTypes.TEXT, allowNull: false },
-      subject: { type: DataTypes.TEXT, allowNull: false },
-      html: { type: DataTypes.TEXT, allowNull: false },
-      text: { type: DataTypes.TEXT, allowNull: false },
-      linkKind: { type: DataTypes.TEXT, allowNull: true, defaultValue: null },
-      linkRef: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
-      status: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'queued' },
-      attempts: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
-      lastError: { type: DataTypes.TEXT, allowNull: true, defaultValue: null },
-      nextAttemptAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
-      sentAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
-      messageId: { type: DataTypes.TEXT, allowNull: true, defaultValue: null },
-      createdBy: { type: DataTypes.INTEGER, allowNull: true },
-      createdAt: DataTypes.DATE,
-      updatedAt: DataTypes.DATE,
+      ...serialId(),
+      ...nullable(DataTypes.INTEGER, 'visitId', 'createdBy'),
+      ...required(DataTypes.TEXT, 'kind', 'toAddress', 'subject', 'html', 'text'),
+      ...optional(DataTypes.TEXT, 'linkKind', 'lastError', 'messageId'),
+      ...optional(DataTypes.INTEGER, 'linkRef'),
+      ...optional(DataTypes.DATE, 'sentAt'),
+      status: withDefault(DataTypes.TEXT, 'queued'),
+      attempts: withDefault(DataTypes.INTEGER, 0),
+      nextAttemptAt: withDefault(DataTypes.DATE, DataTypes.NOW),
+      ...timestamps(),
     },
     { sequelize, tableName: 'emails' },
   );
   EmailAttachment.init(
     {
-      id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
-      emailId: { type: DataTypes.INTEGER, allowNull: false },
-      filename: { type: DataTypes.TEXT, allowNull: false },
-      contentType: { type: DataTypes.TEXT, allowNull: false },
-      content: { type: DataTypes.BLOB, allowNull: false },
-      createdAt: DataTypes.DATE,
+      ...serialId(),
+      ...required(DataTypes.INTEGER, 'emailId'),
+      ...required(DataTypes.TEXT, 'filename', 'contentType'),
+      ...required(DataTypes.BLOB, 'content'),
+      ...createdAt(),
     },
     { sequelize, tableName: 'email_attachments', updatedAt: false },
   );

@@ -4,7 +4,7 @@ import type { VisitStatus } from '../../../shared/schemas/visit';
 import { Visit } from '../visits/visits.model';
 import { BoundParams } from './bound-params';
 
-// The manager's figures as SQL aggregates (DESIGN.md §4.11). Definitions, stated once:
+// The manager's figures as SQL aggregates (DEVELOPERS.md, Figures). Definitions, stated once:
 //
 // - Period: visits whose closedAt falls on a day from `from` to `to` inclusive, in the office's
 //   time zone. "Closed" means status closed or approved: a returned visit is being reworked and

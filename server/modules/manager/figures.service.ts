@@ -1,6 +1,6 @@
 import { CAUSE_CATEGORIES, type CauseCategory } from '../../../shared/schemas/reading';
 import type { CauseMonth, FiguresQuery, ManagerFigures, RepeatVisitEnd } from '../../../shared/schemas/manager-figures';
-import { visitReference } from '../visits/visit-access';
+import { visitReference } from '../../../shared/format/visit-reference';
 import { causeCounts, firstTimeFixCounts, repeatPairs, timeToRepair, type FiguresWindow, type RepeatRow } from './figures.repository';
 
 export const REPEAT_LIST_LIMIT = 200;

@@ -1,6 +1,6 @@
 import type { SessionUser } from '../../../shared/schemas/session';
 import type { VisitTablePage, VisitTableQuery } from '../../../shared/schemas/visit-table';
-import { loadVisitForRead } from '../visits/visit-access';
+import { loadAccessibleVisit } from '../visits/visit-access.service';
 import { findAuditTrail, findTechnicianOptions } from './manager.repository';
 import { countVisits, findVisitPage } from './visit-table.repository';
 
@@ -13,6 +13,6 @@ export const technicianOptions = () => findTechnicianOptions();
 
 /** The visit's audit trail; the visit's own access rule decides who may read it (404 when unknown). */
 export async function auditTrail(user: SessionUser, visitId: number) {
-  await loadVisitForRead(user, visitId);
+  await loadAccessibleVisit(user, visitId);
   return { items: await findAuditTrail(visitId) };
 }

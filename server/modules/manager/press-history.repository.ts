@@ -26,7 +26,7 @@ export interface HistoryRow {
   quantity: Quantity | null;
   circuit: Circuit | null;
   position: Position | null;
-  entry: string | null;
+  entered: string | null;
   value_si: number | null;
   is_open: boolean | null;
   verdict: Verdict | null;
@@ -55,7 +55,7 @@ export async function findPressReadings(pressId: number): Promise<HistoryRow[]> 
   const sql = `
     SELECT v.id AS visit_id, v.started_at, v.status, v.cause_category,
            b.id AS band_set_id, b.generation, b.version AS band_version, b.bands,
-           r.quantity, r.circuit, r.position, r.entry, r.value_si, r.is_open, r.verdict, r.reason, r.judgement
+           r.quantity, r.circuit, r.position, r.entry AS entered, r.value_si, r.is_open, r.verdict, r.reason, r.judgement
     FROM visits v
     LEFT JOIN band_sets b ON b.id = v.band_set_id
     LEFT JOIN readings r ON r.visit_id = v.id AND r.superseded_at IS NULL

@@ -2,7 +2,7 @@ import type { BandSetValues } from '../../../shared/schemas/band-set';
 import type { BandLimits, PressHistory, PressHistoryPoint, PressHistorySeries } from '../../../shared/schemas/manager-figures';
 import { CIRCUIT_LEADS } from '../../../shared/schemas/reading';
 import { AppError } from '../../lib/errors';
-import { visitReference } from '../visits/visit-access';
+import { visitReference } from '../../../shared/format/visit-reference';
 import { findPressForHistory, findPressReadings, type HistoryRow } from './press-history.repository';
 
 type SeriesKind = Pick<PressHistorySeries, 'quantity' | 'circuit' | 'position'>;
@@ -72,7 +72,7 @@ export async function pressHistory(pressId: number): Promise<PressHistory> {
       visitId: r.visit_id,
       reference: visitReference(r.visit_id),
       startedAt: r.started_at.toISOString(),
-      entered: r.entry ?? '',
+      entered: r.entered ?? '',
       judgedValue: typeof judged === 'number' ? judged : null,
       isOpen: r.is_open ?? false,
       verdict: r.verdict,

@@ -1,7 +1,7 @@
 import { QueryTypes } from 'sequelize';
 import type { VisitTableFilter, VisitTableQuery, VisitTableRow } from '../../../shared/schemas/visit-table';
 import { Visit } from '../visits/visits.model';
-import { visitReference } from '../visits/visit-access';
+import { visitReference } from '../../../shared/format/visit-reference';
 import { BoundParams } from './bound-params';
 import { SORT_SQL, visitWhereSql } from './visit-filter';
 

@@ -1,8 +1,5 @@
-import type { Page } from '../../../shared/schemas/common';
 import type { Press as PressDto, PressInput, PressListQuery, PressUpdate } from '../../../shared/schemas/press';
-import { withConstraintMessages } from '../../lib/db-errors';
-import { notFound } from '../../lib/errors';
-import { toPage } from '../../lib/paging';
+import { directoryService, isoTimestamps } from '../../lib/directory-service';
 import type { Press } from './presses.model';
 import { findPress, insertPress, listPresses, savePress } from './presses.repository';
 
@@ -21,8 +18,7 @@ export function toPressDto(p: Press): PressDto {
     controlFirmware: p.controlFirmware,
     monitorFirmware: p.monitorFirmware,
     notes: p.notes,
-    createdAt: p.createdAt.toISOString(),
-    updatedAt: p.updatedAt.toISOString(),
+    ...isoTimestamps(p),
   };
 }
 
@@ -31,25 +27,12 @@ const MESSAGES = {
   foreignKey: 'That site does not exist. Pick a site from the list.',
 };
 
-export async function searchPresses(q: PressListQuery): Promise<Page<PressDto>> {
-  const { rows, count } = await listPresses(q);
-  return toPage(rows.map(toPressDto), count, q);
-}
+const presses = directoryService<Press, PressDto, PressListQuery, PressInput, PressUpdate>({
+  what: 'Press',
+  repository: { list: listPresses, find: findPress, insert: insertPress, save: savePress },
+  toDto: toPressDto,
+  messages: MESSAGES,
+  rereadAfterWrite: true,
+});
 
-export async function getPress(id: number): Promise<PressDto> {
-  const press = await findPress(id);
-  if (!press) throw notFound(`Press ${id}`);
-  return toPressDto(press);
-}
-
-export async function createPress(input: PressInput): Promise<PressDto> {
-  const created = await withConstraintMessages(() => insertPress(input), MESSAGES);
-  return getPress(created.id);
-}
-
-export async function updatePress(id: number, input: PressUpdate): Promise<PressDto> {
-  const press = await findPress(id);
-  if (!press) throw notFound(`Press ${id}`);
-  await withConstraintMessages(() => savePress(press, input), MESSAGES);
-  return getPress(id);
-}
+export const { search: searchPresses, get: getPress, create: createPress, update: updatePress } = presses;

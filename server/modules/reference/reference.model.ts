@@ -1,4 +1,5 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { DataTypes, type Model, type Sequelize } from 'sequelize';
+import { optional, required, serialId, SerialRow, timestamps } from '../../db/columns';
 import type { BandSetValues } from '../../../shared/schemas/band-set';
 import type { FirmwareRule } from '../../../shared/schemas/firmware-rule';
 import type { ProcedureDefinition } from '../../../shared/schemas/procedure';
@@ -6,57 +7,46 @@ import type { ProcedureDefinition } from '../../../shared/schemas/procedure';
 // Versioned reference data (procedures, band sets, firmware rules). A published row is frozen by a
 // database trigger; a change is a new version.
 
-export class ProcedureVersion extends Model<InferAttributes<ProcedureVersion>, InferCreationAttributes<ProcedureVersion>> {
-  declare id: CreationOptional<number>;
-  declare key: string;
+/** What every version row holds besides its content: number, publication, author, timestamps. */
+abstract class VersionRow<M extends Model> extends SerialRow<M> {
   declare version: number;
+  declare publishedAt: Date | null;
+  declare createdBy: number | null;
+}
+
+export class ProcedureVersion extends VersionRow<ProcedureVersion> {
+  declare key: string;
   declare title: string;
   declare definition: ProcedureDefinition;
-  declare publishedAt: Date | null;
-  declare createdBy: number | null;
-  declare createdAt: CreationOptional<Date>;
-  declare updatedAt: CreationOptional<Date>;
 }
 
-export class BandSetVersion extends Model<InferAttributes<BandSetVersion>, InferCreationAttributes<BandSetVersion>> {
-  declare id: CreationOptional<number>;
+export class BandSetVersion extends VersionRow<BandSetVersion> {
   declare generation: string;
-  declare version: number;
   declare label: string;
   declare bands: BandSetValues;
-  declare publishedAt: Date | null;
-  declare createdBy: number | null;
-  declare createdAt: CreationOptional<Date>;
-  declare updatedAt: CreationOptional<Date>;
 }
 
-export class FirmwareRuleSet extends Model<InferAttributes<FirmwareRuleSet>, InferCreationAttributes<FirmwareRuleSet>> {
-  declare id: CreationOptional<number>;
-  declare version: number;
+export class FirmwareRuleSet extends VersionRow<FirmwareRuleSet> {
   declare rules: FirmwareRule[];
-  declare publishedAt: Date | null;
-  declare createdBy: number | null;
-  declare createdAt: CreationOptional<Date>;
-  declare updatedAt: CreationOptional<Date>;
 }
 
-const common = () => ({
-  id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
-  version: { type: DataTypes.INTEGER, allowNull: false },
-  publishedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
-  createdBy: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
-  createdAt: DataTypes.DATE,
-  updatedAt: DataTypes.DATE,
+// The columns every versioned table has (server/db/versioned-table.ts writes them in SQL).
+const versioned = () => ({
+  ...serialId(),
+  ...required(DataTypes.INTEGER, 'version'),
+  ...optional(DataTypes.DATE, 'publishedAt'),
+  ...optional(DataTypes.INTEGER, 'createdBy'),
+  ...timestamps(),
 });
 
 export function initReferenceModels(sequelize: Sequelize): void {
   ProcedureVersion.init(
-    { ...common(), key: { type: DataTypes.TEXT, allowNull: false }, title: { type: DataTypes.TEXT, allowNull: false }, definition: { type: DataTypes.JSONB, allowNull: false } },
+    { ...versioned(), ...required(DataTypes.TEXT, 'key', 'title'), ...required(DataTypes.JSONB, 'definition') },
     { sequelize, tableName: 'procedures' },
   );
   BandSetVersion.init(
-    { ...common(), generation: { type: DataTypes.TEXT, allowNull: false }, label: { type: DataTypes.TEXT, allowNull: false }, bands: { type: DataTypes.JSONB, allowNull: false } },
+    { ...versioned(), ...required(DataTypes.TEXT, 'generation', 'label'), ...required(DataTypes.JSONB, 'bands') },
     { sequelize, tableName: 'band_sets' },
   );
-  FirmwareRuleSet.init({ ...common(), rules: { type: DataTypes.JSONB, allowNull: false } }, { sequelize, tableName: 'firmware_rule_sets' });
+  FirmwareRuleSet.init({ ...versioned(), ...required(DataTypes.JSONB, 'rules') }, { sequelize, tableName: 'firmware_rule_sets' });
 }

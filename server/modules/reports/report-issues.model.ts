@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { createdAt, nullable, optional, required, serialId } from '../../db/columns';
 
 /**
  * One report sent for a visit (issue 1, then a corrected issue 2 …). Its signed link is bound to the
@@ -21,17 +22,14 @@ export class ReportIssue extends Model<InferAttributes<ReportIssue>, InferCreati
 export function initReportIssue(sequelize: Sequelize): void {
   ReportIssue.init(
     {
-      id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
-      visitId: { type: DataTypes.INTEGER, allowNull: false },
-      issueNumber: { type: DataTypes.INTEGER, allowNull: false },
-      nonce: { type: DataTypes.TEXT, allowNull: false },
-      recipient: { type: DataTypes.TEXT, allowNull: false },
-      emailId: { type: DataTypes.INTEGER, allowNull: true },
-      expiresAt: { type: DataTypes.DATE, allowNull: false },
-      acknowledgedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
-      acknowledgedBy: { type: DataTypes.TEXT, allowNull: true, defaultValue: null },
-      createdBy: { type: DataTypes.INTEGER, allowNull: true },
-      createdAt: DataTypes.DATE,
+      ...serialId(),
+      ...required(DataTypes.INTEGER, 'visitId', 'issueNumber'),
+      ...required(DataTypes.TEXT, 'nonce', 'recipient'),
+      ...required(DataTypes.DATE, 'expiresAt'),
+      ...nullable(DataTypes.INTEGER, 'emailId', 'createdBy'),
+      ...optional(DataTypes.DATE, 'acknowledgedAt'),
+      ...optional(DataTypes.TEXT, 'acknowledgedBy'),
+      ...createdAt(),
     },
     { sequelize, tableName: 'report_issues', updatedAt: false },
   );

@@ -3,7 +3,7 @@ import { buildVisitRecord, type VisitRecordSource } from '../../../shared/record
 import type { VisitRecord } from '../../../shared/schemas/visit-record';
 import { Attachment } from '../attachments/attachments.model';
 import { User } from '../users/users.model';
-import { loadVisitContext } from '../visits/visit-context';
+import { loadVisitContext } from '../visits/visit-context.service';
 import { PartUsed } from '../visits/visit-work.model';
 import { visitIncludes } from '../visits/visits.service';
 import { Visit } from '../visits/visits.model';
@@ -77,8 +77,8 @@ export async function readVisitRecordSource(visitId: number, options: RecordOpti
       quantity: r.quantity,
       circuit: r.circuit,
       position: r.position,
-      entered: r.entry,
-      windingTemperatureC: r.windingTempC,
+      entered: r.entered,
+      windingTemperatureC: r.windingTemperatureC,
       cable: r.cable,
       verdict: r.verdict,
       reason: r.reason,

@@ -1,8 +1,5 @@
-import type { Page } from '../../../shared/schemas/common';
 import type { Site as SiteDto, SiteInput, SiteListQuery, SiteUpdate } from '../../../shared/schemas/site';
-import { withConstraintMessages } from '../../lib/db-errors';
-import { notFound } from '../../lib/errors';
-import { toPage } from '../../lib/paging';
+import { directoryService, isoTimestamps } from '../../lib/directory-service';
 import type { Site } from './sites.model';
 import { findSite, insertSite, listSites, saveSite } from './sites.repository';
 
@@ -14,8 +11,7 @@ export function toSiteDto(s: Site): SiteDto {
     name: s.name,
     address: s.address,
     city: s.city,
-    createdAt: s.createdAt.toISOString(),
-    updatedAt: s.updatedAt.toISOString(),
+    ...isoTimestamps(s),
   };
 }
 
@@ -24,25 +20,12 @@ const MESSAGES = {
   foreignKey: 'That customer does not exist. Pick a customer from the list.',
 };
 
-export async function searchSites(q: SiteListQuery): Promise<Page<SiteDto>> {
-  const { rows, count } = await listSites(q);
-  return toPage(rows.map(toSiteDto), count, q);
-}
+const sites = directoryService<Site, SiteDto, SiteListQuery, SiteInput, SiteUpdate>({
+  what: 'Site',
+  repository: { list: listSites, find: findSite, insert: insertSite, save: saveSite },
+  toDto: toSiteDto,
+  messages: MESSAGES,
+  rereadAfterWrite: true,
+});
 
-export async function getSite(id: number): Promise<SiteDto> {
-  const site = await findSite(id);
-  if (!site) throw notFound(`Site ${id}`);
-  return toSiteDto(site);
-}
-
-export async function createSite(input: SiteInput): Promise<SiteDto> {
-  const created = await withConstraintMessages(() => insertSite(input), MESSAGES);
-  return getSite(created.id);
-}
-
-export async function updateSite(id: number, input: SiteUpdate): Promise<SiteDto> {
-  const site = await findSite(id);
-  if (!site) throw notFound(`Site ${id}`);
-  await withConstraintMessages(() => saveSite(site, input), MESSAGES);
-  return getSite(id);
-}
+export const { search: searchSites, get: getSite, create: createSite, update: updateSite } = sites;

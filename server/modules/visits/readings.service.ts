@@ -6,8 +6,8 @@ import type { SessionUser } from '../../../shared/schemas/session';
 import type { ReadingSaveInput } from '../../../shared/schemas/visit';
 import { AppError } from '../../lib/errors';
 import { audit } from '../audit/audit';
-import { loadVisitForWrite } from './visit-access';
-import { bandValues, currentReadings, findStep, loadVisitContext, type VisitContext } from './visit-context';
+import { loadWritableVisit } from './visit-access.service';
+import { bandValues, currentReadings, findStep, loadVisitContext, type VisitContext } from './visit-context.service';
 import { readingDto } from './visit-dto';
 import { SavedMeanwhile, saveOnce } from './save-once';
 import { toReadingInput } from './visit-state';
@@ -60,7 +60,7 @@ async function storeReading(user: SessionUser, visitId: number, input: ReadingSa
     throw new AppError(409, 'reading_unconfirmed', `Confirm this reading first: ${question.question}`, { entered: question.question });
   }
   return Visit.sequelize!.transaction(async (transaction) => {
-    const visit = await loadVisitForWrite(user, visitId, transaction);
+    const visit = await loadWritableVisit(user, visitId, transaction);
     // A retry that waited for the row lock behind its first try finds that try's reading now.
     if (await Reading.findByPk(input.id, { transaction })) throw new SavedMeanwhile();
     const ctx = await loadVisitContext(visit, transaction);
@@ -79,10 +79,10 @@ async function storeReading(user: SessionUser, visitId: number, input: ReadingSa
         quantity: input.quantity,
         circuit: input.circuit,
         position: input.position,
-        entry: input.entered,
+        entered: input.entered,
         valueSi: parsed.kind === 'value' ? parsed.value : null,
         isOpen: parsed.kind === 'over_range',
-        windingTempC: input.windingTemperatureC ?? null,
+        windingTemperatureC: input.windingTemperatureC ?? null,
         cable: input.cable ?? null,
         ...verdictFields(undefined),
         bandSetId: ctx.bandSet?.id ?? null,

@@ -7,8 +7,8 @@ import type { SessionUser } from '../../../shared/schemas/session';
 import type { StepAnswerInput } from '../../../shared/schemas/visit';
 import { AppError } from '../../lib/errors';
 import { audit } from '../audit/audit';
-import { loadVisitForWrite } from './visit-access';
-import { bandValues, findStep, latestPublishedBandSet, loadVisitContext, type VisitContext } from './visit-context';
+import { loadWritableVisit } from './visit-access.service';
+import { bandValues, findStep, latestPublishedBandSet, loadVisitContext, type VisitContext } from './visit-context.service';
 import { missingReadings, stepReadings, toReadingInput, traverse } from './visit-state';
 import { SavedMeanwhile, saveOnce } from './save-once';
 import { StepResult } from './visit-work.model';
@@ -117,7 +117,7 @@ export async function answerStep(user: SessionUser, visitId: number, stepId: str
 
 async function storeAnswer(user: SessionUser, visitId: number, stepId: string, input: StepAnswerInput) {
   return Visit.sequelize!.transaction(async (transaction) => {
-    const visit = await loadVisitForWrite(user, visitId, transaction);
+    const visit = await loadWritableVisit(user, visitId, transaction);
     // A retry that waited for the row lock behind its first try finds that try's answer now.
     if (await StepResult.findByPk(input.id, { transaction })) throw new SavedMeanwhile();
     const ctx = await loadVisitContext(visit, transaction);

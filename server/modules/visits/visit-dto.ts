@@ -2,8 +2,8 @@ import type { Traversal } from '../../../shared/domain/traverse-procedure';
 import type { BandSetRecord, PartRecord, ReadingRecord, StepResultRecord, VisitDetail, VisitSummary, VisitTraversal } from '../../../shared/schemas/visit-detail';
 import type { BandSetVersion } from '../reference/reference.model';
 import { toPressDto } from '../presses/presses.service';
-import { visitReference } from './visit-access';
-import type { VisitContext } from './visit-context';
+import { visitReference } from '../../../shared/format/visit-reference';
+import type { VisitContext } from './visit-context.service';
 import { generationSuggestion, likelyCauses } from './visit-state';
 import type { PartUsed, Reading, StepResult } from './visit-work.model';
 import type { Visit } from './visits.model';
@@ -45,10 +45,10 @@ export const readingDto = (r: Reading): ReadingRecord => ({
   quantity: r.quantity,
   circuit: r.circuit,
   position: r.position,
-  entered: r.entry,
+  entered: r.entered,
   valueSi: r.valueSi,
   isOpen: r.isOpen,
-  windingTemperatureC: r.windingTempC,
+  windingTemperatureC: r.windingTemperatureC,
   cable: r.cable,
   verdict: r.verdict,
   reason: r.reason,

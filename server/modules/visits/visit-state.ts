@@ -6,15 +6,15 @@ import { traverseProcedure, type Traversal } from '../../../shared/domain/traver
 import type { MeasureStep } from '../../../shared/schemas/procedure';
 import type { Circuit, ReadingInput } from '../../../shared/schemas/reading';
 import type { Reading } from './visit-work.model';
-import { bandValues, currentReadings, currentResults, type VisitContext } from './visit-context';
+import { bandValues, currentReadings, currentResults, type VisitContext } from './visit-context.service';
 
 export function toReadingInput(r: Reading): ReadingInput {
   return {
     quantity: r.quantity,
     circuit: r.circuit,
     position: r.position,
-    entered: r.entry,
-    ...(r.windingTempC !== null ? { windingTemperatureC: r.windingTempC } : {}),
+    entered: r.entered,
+    ...(r.windingTemperatureC !== null ? { windingTemperatureC: r.windingTemperatureC } : {}),
     ...(r.cable ? { cable: r.cable } : {}),
   };
 }

@@ -3,14 +3,14 @@ import type { SessionUser } from '../../../shared/schemas/session';
 import type { CloseOutInput } from '../../../shared/schemas/visit';
 import { AppError } from '../../lib/errors';
 import { audit } from '../audit/audit';
-import { prepareSignature } from '../attachments/attachments.service';
-import { enqueueVisitReport } from '../reports/reports.service';
-import { loadVisitForRead, loadVisitForWrite, visitReference } from './visit-access';
-import { loadVisitContext } from './visit-context';
+import { visitReference } from '../../../shared/format/visit-reference';
+import { loadAccessibleVisit, loadWritableVisit } from './visit-access.service';
+import { loadVisitContext } from './visit-context.service';
 import { traverse } from './visit-state';
 import { PartUsed } from './visit-work.model';
 import { getVisitDetail } from './visits.service';
 import { Visit } from './visits.model';
+import { visitClosePorts } from './visit-close-ports';
 
 /** The status trigger refused a change another request made first (a fallback: the row lock comes first). */
 function isStatusRace(err: unknown): boolean {
@@ -51,15 +51,15 @@ const partIdInUse = (id: string) =>
  * of two closes at once, the second waits, sees the visit closed and answers 409, leaving nothing.
  */
 export async function closeVisit(user: SessionUser, visitId: number, input: CloseOutInput) {
-  const early = await loadVisitForWrite(user, visitId);
+  const early = await loadWritableVisit(user, visitId);
   if (early.status !== 'in_progress') throw notInProgress(visitId);
   // Checked and re-encoded before the row is locked; written only inside the transaction.
-  const signature = await prepareSignature(Buffer.from(input.signaturePng.slice(input.signaturePng.indexOf(',') + 1), 'base64'));
+  const signature = await visitClosePorts().prepareSignature(Buffer.from(input.signaturePng.slice(input.signaturePng.indexOf(',') + 1), 'base64'));
   const now = new Date();
 
   try {
     await changeStatus(visitId, async (transaction) => {
-      const locked = await loadVisitForWrite(user, visitId, transaction);
+      const locked = await loadWritableVisit(user, visitId, transaction);
       if (locked.status !== 'in_progress') throw notInProgress(visitId);
       const traversal = traverse(await loadVisitContext(locked, transaction));
       if (traversal.findings.length === 0) {
@@ -98,7 +98,7 @@ export async function closeVisit(user: SessionUser, visitId: number, input: Clos
         transaction,
       );
       // The report e-mail is queued with the close itself: committed together, or not at all.
-      await enqueueVisitReport(visitId, transaction, user.id);
+      await visitClosePorts().enqueueVisitReport(visitId, transaction, user.id);
     });
   } catch (err) {
     await signature.discard();
@@ -118,7 +118,7 @@ const notInProgress = (visitId: number) => new AppError(409, 'visit_not_open', `
 export async function reopenVisit(user: SessionUser, visitId: number) {
   await changeStatus(visitId, async (transaction) => {
     // Locked, so a reopen and a second reopen (or a review) cannot both pass the check below.
-    const visit = await loadVisitForRead(user, visitId, transaction);
+    const visit = await loadAccessibleVisit(user, visitId, transaction);
     if (visit.status !== 'returned') throw new AppError(409, 'not_returned', `Visit ${visitReference(visitId)} is ${visit.status}; only a returned visit can be reopened.`);
     await visit.update({ status: 'in_progress', closedAt: null }, { transaction });
     await audit({ visitId, actorId: user.id, action: 'visit_reopened', detail: { reviewComment: visit.reviewComment } }, transaction);
@@ -131,14 +131,14 @@ const notClosed = (visitId: number, status: string) =>
 
 /** The service manager's decision on a closed visit: approve it, or return it with a comment. */
 export async function reviewVisit(user: SessionUser, visitId: number, decision: { decision: 'approve' | 'return'; comment?: string }) {
-  const early = await loadVisitForRead(user, visitId);
+  const early = await loadAccessibleVisit(user, visitId);
   if (early.status !== 'closed') throw notClosed(visitId, early.status);
   if (decision.decision === 'return' && !decision.comment) {
     throw new AppError(400, 'invalid_input', 'Some fields need attention.', { comment: 'Say what the technician should correct.' });
   }
   await changeStatus(visitId, async (transaction) => {
     // Locked: of an approve and a return at once, the second sees the first's decision and answers 409.
-    const visit = await loadVisitForRead(user, visitId, transaction);
+    const visit = await loadAccessibleVisit(user, visitId, transaction);
     if (visit.status !== 'closed') throw notClosed(visitId, visit.status);
     await visit.update(
       decision.decision === 'approve' ? { status: 'approved' } : { status: 'returned', reviewComment: decision.comment ?? null },

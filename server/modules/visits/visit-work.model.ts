@@ -1,4 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { createdAt, nullable, optional, required, uuidId } from '../../db/columns';
 import type { Cable, Circuit, Position, Quantity, Verdict } from '../../../shared/schemas/reading';
 
 /** One answer at one step. A changed answer supersedes the earlier row, which stays as history. */
@@ -24,10 +25,10 @@ export class Reading extends Model<InferAttributes<Reading>, InferCreationAttrib
   declare quantity: Quantity;
   declare circuit: Circuit;
   declare position: Position;
-  declare entry: string;
+  declare entered: string;
   declare valueSi: number | null;
   declare isOpen: boolean;
-  declare windingTempC: number | null;
+  declare windingTemperatureC: number | null;
   declare cable: Cable | null;
   declare verdict: Verdict | null;
   declare reason: string;
@@ -51,56 +52,50 @@ export class PartUsed extends Model<InferAttributes<PartUsed>, InferCreationAttr
 
 const noUpdatedAt = { timestamps: true, updatedAt: false } as const;
 
+/** A replaced answer or reading keeps its row and is marked with when it stopped counting. */
+const superseded = () => optional(DataTypes.DATE, 'supersededAt');
+
 export function initVisitWorkModels(sequelize: Sequelize): void {
   StepResult.init(
     {
-      id: { type: DataTypes.UUID, primaryKey: true },
-      visitId: { type: DataTypes.INTEGER, allowNull: false },
-      stepId: { type: DataTypes.TEXT, allowNull: false },
-      outcome: { type: DataTypes.TEXT, allowNull: true },
-      answer: { type: DataTypes.JSONB, allowNull: false },
-      note: { type: DataTypes.TEXT, allowNull: true },
-      confirmedAt: { type: DataTypes.DATE, allowNull: true },
-      createdBy: { type: DataTypes.INTEGER, allowNull: false },
-      createdAt: DataTypes.DATE,
-      supersededAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
-      supersededReason: { type: DataTypes.TEXT, allowNull: true, defaultValue: null },
+      ...uuidId(),
+      ...required(DataTypes.INTEGER, 'visitId', 'createdBy'),
+      ...required(DataTypes.TEXT, 'stepId'),
+      ...required(DataTypes.JSONB, 'answer'),
+      ...nullable(DataTypes.TEXT, 'outcome', 'note'),
+      ...nullable(DataTypes.DATE, 'confirmedAt'),
+      ...createdAt(),
+      ...superseded(),
+      ...optional(DataTypes.TEXT, 'supersededReason'),
     },
     { sequelize, tableName: 'step_results', ...noUpdatedAt },
   );
   Reading.init(
     {
-      id: { type: DataTypes.UUID, primaryKey: true },
-      visitId: { type: DataTypes.INTEGER, allowNull: false },
-      stepId: { type: DataTypes.TEXT, allowNull: false },
-      quantity: { type: DataTypes.TEXT, allowNull: false },
-      circuit: { type: DataTypes.TEXT, allowNull: false },
-      position: { type: DataTypes.TEXT, allowNull: false },
-      entry: { type: DataTypes.TEXT, allowNull: false },
-      valueSi: { type: DataTypes.DOUBLE, allowNull: true },
-      isOpen: { type: DataTypes.BOOLEAN, allowNull: false },
-      windingTempC: { type: DataTypes.DOUBLE, allowNull: true },
-      cable: { type: DataTypes.JSONB, allowNull: true },
-      verdict: { type: DataTypes.TEXT, allowNull: true },
-      reason: { type: DataTypes.TEXT, allowNull: false },
-      judgement: { type: DataTypes.JSONB, allowNull: false },
-      bandSetId: { type: DataTypes.INTEGER, allowNull: true },
-      createdBy: { type: DataTypes.INTEGER, allowNull: false },
-      createdAt: DataTypes.DATE,
-      supersededAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
+      ...uuidId(),
+      ...required(DataTypes.INTEGER, 'visitId', 'createdBy'),
+      ...required(DataTypes.TEXT, 'stepId', 'quantity', 'circuit', 'position', 'reason'),
+      // The API's names; the columns keep the names they were created with.
+      entered: { type: DataTypes.TEXT, allowNull: false, field: 'entry' },
+      windingTemperatureC: { type: DataTypes.DOUBLE, allowNull: true, field: 'winding_temp_c' },
+      ...required(DataTypes.BOOLEAN, 'isOpen'),
+      ...required(DataTypes.JSONB, 'judgement'),
+      ...nullable(DataTypes.DOUBLE, 'valueSi'),
+      ...nullable(DataTypes.JSONB, 'cable'),
+      ...nullable(DataTypes.TEXT, 'verdict'),
+      ...nullable(DataTypes.INTEGER, 'bandSetId'),
+      ...createdAt(),
+      ...superseded(),
     },
     { sequelize, tableName: 'readings', ...noUpdatedAt },
   );
   PartUsed.init(
     {
-      id: { type: DataTypes.UUID, primaryKey: true },
-      visitId: { type: DataTypes.INTEGER, allowNull: false },
-      partNumber: { type: DataTypes.TEXT, allowNull: false },
-      description: { type: DataTypes.TEXT, allowNull: false },
-      quantity: { type: DataTypes.INTEGER, allowNull: false },
-      serialRemoved: { type: DataTypes.TEXT, allowNull: true },
-      serialFitted: { type: DataTypes.TEXT, allowNull: true },
-      createdAt: DataTypes.DATE,
+      ...uuidId(),
+      ...required(DataTypes.INTEGER, 'visitId', 'quantity'),
+      ...required(DataTypes.TEXT, 'partNumber', 'description'),
+      ...nullable(DataTypes.TEXT, 'serialRemoved', 'serialFitted'),
+      ...createdAt(),
     },
     { sequelize, tableName: 'parts_used', ...noUpdatedAt },
   );

@@ -1,11 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import { DataTypes, type CreationOptional, type ForeignKey, type NonAttribute, type Sequelize } from 'sequelize';
+import { optional, serialId, SerialRow, timestamps, withDefault } from '../../db/columns';
 import type { CauseCategory } from '../../../shared/schemas/reading';
 import type { ReturnToService, VisitStatus } from '../../../shared/schemas/visit';
 import type { Press } from '../presses/presses.model';
 import type { User } from '../users/users.model';
 
-export class Visit extends Model<InferAttributes<Visit>, InferCreationAttributes<Visit>> {
-  declare id: CreationOptional<number>;
+export class Visit extends SerialRow<Visit> {
   declare pressId: ForeignKey<Press['id']>;
   declare technicianId: ForeignKey<User['id']>;
   declare status: CreationOptional<VisitStatus>;
@@ -29,41 +29,22 @@ export class Visit extends Model<InferAttributes<Visit>, InferCreationAttributes
   declare reviewComment: CreationOptional<string | null>;
   declare startedAt: Date | null;
   declare closedAt: Date | null;
-  declare createdAt: CreationOptional<Date>;
-  declare updatedAt: CreationOptional<Date>;
   declare press?: NonAttribute<Press>;
   declare technician?: NonAttribute<User>;
 }
 
-const text = () => ({ type: DataTypes.TEXT, allowNull: true, defaultValue: null });
-
 export function initVisit(sequelize: Sequelize): void {
   Visit.init(
     {
-      id: { type: DataTypes.INTEGER, autoIncrement: true, primaryKey: true },
-      status: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'draft' },
-      faultDisplayed: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
-      controlFirmwareFound: { type: DataTypes.TEXT, allowNull: true, defaultValue: null },
-      monitorFirmwareFound: { type: DataTypes.TEXT, allowNull: true, defaultValue: null },
-      procedureId: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
-      bandSetId: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
-      firmwareRuleSetId: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
-      controlFirmwareLeft: text(),
-      monitorFirmwareLeft: text(),
-      causeCategory: text(),
-      actionsTaken: text(),
-      recommendations: text(),
-      labourMinutes: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
-      travelMinutes: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
-      returnToService: { type: DataTypes.JSONB, allowNull: true, defaultValue: null },
-      contactName: text(),
-      contactEmail: text(),
-      signedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
-      reviewComment: text(),
-      startedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
-      closedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
-      createdAt: DataTypes.DATE,
-      updatedAt: DataTypes.DATE,
+      ...serialId(),
+      status: withDefault(DataTypes.TEXT, 'draft'),
+      faultDisplayed: withDefault(DataTypes.TEXT, ''),
+      ...optional(DataTypes.INTEGER, 'procedureId', 'bandSetId', 'firmwareRuleSetId', 'labourMinutes', 'travelMinutes'),
+      ...optional(DataTypes.TEXT, 'controlFirmwareFound', 'monitorFirmwareFound', 'controlFirmwareLeft', 'monitorFirmwareLeft'),
+      ...optional(DataTypes.TEXT, 'causeCategory', 'actionsTaken', 'recommendations', 'contactName', 'contactEmail', 'reviewComment'),
+      ...optional(DataTypes.JSONB, 'returnToService'),
+      ...optional(DataTypes.DATE, 'signedAt', 'startedAt', 'closedAt'),
+      ...timestamps(),
     },
     { sequelize, tableName: 'visits' },
   );

@@ -10,8 +10,8 @@ import { Press } from '../presses/presses.model';
 import { BandSetVersion, FirmwareRuleSet, ProcedureVersion } from '../reference/reference.model';
 import { Site } from '../sites/sites.model';
 import { User } from '../users/users.model';
-import { loadVisitForRead } from './visit-access';
-import { latestPublishedBandSet, loadVisitContext } from './visit-context';
+import { loadAccessibleVisit } from './visit-access.service';
+import { latestPublishedBandSet, loadVisitContext } from './visit-context.service';
 import { visitDetail, visitSummary, type VisitDetailDto } from './visit-dto';
 import { traverse } from './visit-state';
 import { PartUsed } from './visit-work.model';
@@ -79,7 +79,7 @@ export async function listVisits(user: SessionUser, q: VisitListQuery): Promise<
 }
 
 export async function getVisitDetail(user: SessionUser, visitId: number): Promise<VisitDetailDto> {
-  await loadVisitForRead(user, visitId);
+  await loadAccessibleVisit(user, visitId);
   return detailById(visitId);
 }
 

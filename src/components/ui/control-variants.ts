@@ -35,3 +35,8 @@ export const choiceCardVariants = cva(
     defaultVariants: { align: 'center' },
   },
 );
+
+/** A small on/off chip for filters: a checkbox in a ≥44 px pill, marked when on or focused. */
+export const chipVariants = cva(
+  'flex min-h-touch cursor-pointer items-center gap-3 rounded-lg border-2 border-surface-line px-4 text-lg text-ink has-[:checked]:border-accent has-[:checked]:bg-accent-soft has-[:focus-visible]:ring-[3px] has-[:focus-visible]:ring-accent',
+);

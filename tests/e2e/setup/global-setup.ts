@@ -85,7 +85,7 @@ export default async function setup(project: TestProject) {
   const { seedDemo } = await import('../../../server/db/seed/seed-demo');
   const { loadEnv } = await import('../../../server/config/env');
   const { createApp } = await import('../../../server/app');
-  const { startOutboxWorker } = await import('../../../server/modules/emails/outbox');
+  const { startOutboxWorker } = await import('../../../server/modules/emails/outbox.service');
 
   const sequelize = createSequelize(databaseUrl);
   await seedDemo(sequelize);

@@ -1,17 +1,14 @@
 import { Link } from 'react-router-dom';
-import { PageHeader } from '@/components/ui/page-header';
+import { PageShell } from '@/components/ui/page-shell';
 import { useSessionUser } from '@/features/session/hooks/use-session-user';
-import { useDocumentTitle } from '@/lib/use-document-title';
 import { ADMIN_SECTIONS } from '../../access';
 
 /** One door to the office's record keeping: what each role may manage, with a line on why it matters. */
 export function AdminHomePage() {
-  useDocumentTitle('Administration');
   const user = useSessionUser();
   const sections = ADMIN_SECTIONS.filter((s) => s.roles.includes(user.role));
   return (
-    <>
-      <PageHeader title="Administration" description="The records and reference data Crankwise works from." />
+    <PageShell title="Administration" description="The records and reference data Crankwise works from.">
       <ul className="grid gap-4 sm:grid-cols-2">
         {sections.map((s) => (
           <li key={s.to}>
@@ -25,6 +22,6 @@ export function AdminHomePage() {
           </li>
         ))}
       </ul>
-    </>
+    </PageShell>
   );
 }

@@ -1,13 +1,10 @@
-import { PageHeader } from '@/components/ui/page-header';
+import { PageShell } from '@/components/ui/page-shell';
 import { PressDirectory } from '@/features/admin-directory/components/directory-workspace';
-import { useDocumentTitle } from '@/lib/use-document-title';
 
 export function DirectoryPressesPage() {
-  useDocumentTitle('Manage presses');
   return (
-    <>
-      <PageHeader title="Manage presses" description="Each press with its site, control, sensor generation and firmware as installed." />
+    <PageShell title="Manage presses" description="Each press with its site, control, sensor generation and firmware as installed.">
       <PressDirectory />
-    </>
+    </PageShell>
   );
 }

@@ -1,13 +1,10 @@
-import { PageHeader } from '@/components/ui/page-header';
+import { PageShell } from '@/components/ui/page-shell';
 import { SiteDirectory } from '@/features/admin-directory/components/directory-workspace';
-import { useDocumentTitle } from '@/lib/use-document-title';
 
 export function DirectorySitesPage() {
-  useDocumentTitle('Manage sites');
   return (
-    <>
-      <PageHeader title="Manage sites" description="The plants of each customer." />
+    <PageShell title="Manage sites" description="The plants of each customer.">
       <SiteDirectory />
-    </>
+    </PageShell>
   );
 }

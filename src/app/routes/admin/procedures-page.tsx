@@ -1,19 +1,16 @@
 import { useSearchParams } from 'react-router-dom';
-import { PageHeader } from '@/components/ui/page-header';
+import { PageShell } from '@/components/ui/page-shell';
 import { ProcedureImport } from '@/features/admin-reference/components/procedure-import';
 import { ProcedureList } from '@/features/admin-reference/components/procedure-list';
 import { ProcedureVersion } from '@/features/admin-reference/components/procedure-version';
-import { useDocumentTitle } from '@/lib/use-document-title';
 
 export function ProceduresPage() {
-  useDocumentTitle('Procedures');
   const [params, setParams] = useSearchParams();
   const parsed = Number.parseInt(params.get('version') ?? '', 10);
   const selected = Number.isFinite(parsed) ? parsed : null;
   const select = (id: number | null) => setParams(id === null ? {} : { version: String(id) });
   return (
-    <>
-      <PageHeader title="Procedures" description="Import a procedure as JSON, check it with the validator, look at its branching, and publish it as a new version." />
+    <PageShell title="Procedures" description="Import a procedure as JSON, check it with the validator, look at its branching, and publish it as a new version.">
       <div className="space-y-10">
         <ProcedureList selectedId={selected} onSelect={select} />
         {selected !== null && <ProcedureVersion key={selected} id={selected} onDiscarded={() => select(null)} />}
@@ -24,6 +21,6 @@ export function ProceduresPage() {
           <ProcedureImport onImported={select} />
         </section>
       </div>
-    </>
+    </PageShell>
   );
 }

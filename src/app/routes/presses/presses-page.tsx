@@ -1,16 +1,13 @@
-import { PageHeader } from '@/components/ui/page-header';
+import { PageShell } from '@/components/ui/page-shell';
 import { SearchBox } from '@/components/ui/search-box';
 import { PressList } from '@/features/presses/components/press-list';
-import { useDocumentTitle } from '@/lib/use-document-title';
 import { useListParams } from '@/lib/use-list-params';
 
 export function PressesPage() {
-  useDocumentTitle('Presses');
   const { q, page, setQ, setPage } = useListParams();
 
   return (
-    <>
-      <PageHeader title="Presses" description="Every press under service, by asset tag." />
+    <PageShell title="Presses" description="Every press under service, by asset tag.">
       <div className="mb-6">
         <SearchBox
           label="Find a press"
@@ -20,6 +17,6 @@ export function PressesPage() {
         />
       </div>
       <PressList q={q} page={page} onPageChange={setPage} />
-    </>
+    </PageShell>
   );
 }

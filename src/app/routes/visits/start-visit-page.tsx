@@ -1,15 +1,13 @@
 import { useQuery } from '@tanstack/react-query';
 import { useNavigate, useSearchParams } from 'react-router-dom';
 import { LoadError } from '@/components/ui/load-error';
-import { PageHeader } from '@/components/ui/page-header';
+import { PageShell } from '@/components/ui/page-shell';
 import { Spinner } from '@/components/ui/spinner';
 import { pressDetailOptions } from '@/api/presses';
 import { StartVisitForm } from '@/features/visits/components/start/start-visit-form';
-import { useDocumentTitle } from '@/lib/use-document-title';
 
 /** Start a visit; `?pressId=` (from a press card) chooses the press in advance. */
 export function StartVisitPage() {
-  useDocumentTitle('Start a visit');
   const navigate = useNavigate();
   const [params] = useSearchParams();
   const pressId = Number(params.get('pressId'));
@@ -17,8 +15,7 @@ export function StartVisitPage() {
   const press = useQuery({ ...pressDetailOptions(preselected ?? 0), enabled: preselected !== null });
 
   return (
-    <>
-      <PageHeader title="Start a visit" description="Which press, what the control shows, and the procedure to follow." />
+    <PageShell title="Start a visit" description="Which press, what the control shows, and the procedure to follow.">
       {preselected !== null && press.isPending ? (
         <Spinner label="Loading the press…" />
       ) : preselected !== null && press.isError ? (
@@ -26,6 +23,6 @@ export function StartVisitPage() {
       ) : (
         <StartVisitForm initialPress={press.data ?? null} onStarted={(visit) => void navigate(`/visits/${visit.id}`)} />
       )}
-    </>
+    </PageShell>
   );
 }

@@ -1,38 +1,15 @@
-import { zodResolver } from '@hookform/resolvers/zod';
-import { useForm } from 'react-hook-form';
-import type { z } from 'zod';
-import { customerInputSchema, type Customer, type CustomerInput } from '@shared/schemas/customer';
+import { customerInputSchema, type Customer } from '@shared/schemas/customer';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
-import { useSaveRecord } from '@/api/directory';
+import { useRecordForm } from '../hooks/use-record-form';
 import { RecordForm } from './record-form';
-import { applyServerErrors } from '@/lib/apply-server-errors';
 
-type Fields = z.input<typeof customerInputSchema>;
 const NAMES = ['name', 'contactName', 'contactEmail', 'contactPhone', 'notes'] as const;
 
 export function CustomerForm({ customer, onDone }: { customer: Customer | null; onDone: () => void }) {
-  const save = useSaveRecord('customers');
-  const { register, handleSubmit, setError, formState: { errors } } = useForm<Fields, unknown, CustomerInput>({
-    resolver: zodResolver(customerInputSchema),
-    defaultValues: {
-      name: customer?.name ?? '',
-      contactName: customer?.contactName ?? '',
-      contactEmail: customer?.contactEmail ?? '',
-      contactPhone: customer?.contactPhone ?? '',
-      notes: customer?.notes ?? '',
-    },
-  });
-  const onSubmit = handleSubmit(async (values) => {
-    try {
-      await save.mutateAsync({ id: customer?.id ?? null, values });
-      onDone();
-    } catch (error) {
-      applyServerErrors({ setError }, error, NAMES);
-    }
-  });
+  const { save, register, errors, onSubmit } = useRecordForm({ resource: 'customers', schema: customerInputSchema, record: customer, names: NAMES, onDone });
   return (
-    <RecordForm title={customer ? `Edit ${customer.name}` : 'Add a customer'} onSubmit={() => void onSubmit()} onCancel={onDone} busy={save.isPending} error={save.error}>
+    <RecordForm title={customer ? `Edit ${customer.name}` : 'Add a customer'} onSubmit={onSubmit} onCancel={onDone} busy={save.isPending} error={save.error}>
       <Field label="Customer name" error={errors.name?.message}>
         <TextInput {...register('name')} />
       </Field>

@@ -1,59 +1,27 @@
-import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
-import { useForm } from 'react-hook-form';
-import type { z } from 'zod';
-import { pressInputSchema, type Press, type PressInput } from '@shared/schemas/press';
+import { pressInputSchema, type Press } from '@shared/schemas/press';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
-import { directoryListOptions, useSaveRecord } from '@/api/directory';
+import { directoryListOptions } from '@/api/directory';
+import { useRecordForm } from '../hooks/use-record-form';
 import { RecordForm } from './record-form';
 import { Select } from '@/components/ui/select';
-import { applyServerErrors } from '@/lib/apply-server-errors';
 
-type Fields = z.input<typeof pressInputSchema>;
 const NAMES = ['siteId', 'assetTag', 'model', 'tonnage', 'controlModel', 'sensorGeneration', 'controlFirmware', 'monitorFirmware', 'notes'] as const;
 
 export function PressForm({ press, onDone }: { press: Press | null; onDone: () => void }) {
-  const save = useSaveRecord('presses');
+  const { save, register, errors, onSubmit } = useRecordForm({ resource: 'presses', schema: pressInputSchema, record: press, names: NAMES, onDone });
   const sites = useQuery(directoryListOptions('sites', { q: '', page: 1, pageSize: 100 }));
-  const { register, handleSubmit, setError, formState: { errors } } = useForm<Fields, unknown, PressInput>({
-    resolver: zodResolver(pressInputSchema),
-    defaultValues: {
-      siteId: press?.siteId ?? '',
-      assetTag: press?.assetTag ?? '',
-      model: press?.model ?? '',
-      tonnage: press?.tonnage ?? '',
-      controlModel: press?.controlModel ?? '',
-      sensorGeneration: press?.sensorGeneration ?? '',
-      controlFirmware: press?.controlFirmware ?? '',
-      monitorFirmware: press?.monitorFirmware ?? '',
-      notes: press?.notes ?? '',
-    },
-  });
-  const onSubmit = handleSubmit(async (values) => {
-    try {
-      await save.mutateAsync({ id: press?.id ?? null, values });
-      onDone();
-    } catch (error) {
-      applyServerErrors({ setError }, error, NAMES);
-    }
-  });
   const text = (name: (typeof NAMES)[number], label: string, hint?: string) => (
     <Field label={label} hint={hint} error={errors[name]?.message}>
       <TextInput {...register(name)} />
     </Field>
   );
   return (
-    <RecordForm title={press ? `Edit press ${press.assetTag}` : 'Add a press'} onSubmit={() => void onSubmit()} onCancel={onDone} busy={save.isPending} error={save.error}>
+    <RecordForm title={press ? `Edit press ${press.assetTag}` : 'Add a press'} onSubmit={onSubmit} onCancel={onDone} busy={save.isPending} error={save.error}>
       <Field label="Site" error={errors.siteId?.message} hint={sites.isPending ? 'Loading sites…' : undefined}>
-        <Select {...register('siteId')}>
+        <Select {...register('siteId')} options={sites.data?.items.map((s) => ({ value: String(s.id), label: s.customerName ? `${s.name} — ${s.customerName}` : s.name }))}>
           <option value="">Pick the site</option>
-          {sites.data?.items.map((s) => (
-            <option key={s.id} value={s.id}>
-              {s.name}
-              {s.customerName ? ` — ${s.customerName}` : ''}
-            </option>
-          ))}
         </Select>
       </Field>
       <div className="grid gap-4 md:grid-cols-3">

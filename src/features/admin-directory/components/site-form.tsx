@@ -1,43 +1,22 @@
-import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
-import { useForm } from 'react-hook-form';
-import type { z } from 'zod';
-import { siteInputSchema, type Site, type SiteInput } from '@shared/schemas/site';
+import { siteInputSchema, type Site } from '@shared/schemas/site';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
-import { directoryListOptions, useSaveRecord } from '@/api/directory';
+import { directoryListOptions } from '@/api/directory';
+import { useRecordForm } from '../hooks/use-record-form';
 import { RecordForm } from './record-form';
 import { Select } from '@/components/ui/select';
-import { applyServerErrors } from '@/lib/apply-server-errors';
 
-type Fields = z.input<typeof siteInputSchema>;
 const NAMES = ['customerId', 'name', 'address', 'city'] as const;
 
 export function SiteForm({ site, onDone }: { site: Site | null; onDone: () => void }) {
-  const save = useSaveRecord('sites');
+  const { save, register, errors, onSubmit } = useRecordForm({ resource: 'sites', schema: siteInputSchema, record: site, names: NAMES, onDone });
   const customers = useQuery(directoryListOptions('customers', { q: '', page: 1, pageSize: 100 }));
-  const { register, handleSubmit, setError, formState: { errors } } = useForm<Fields, unknown, SiteInput>({
-    resolver: zodResolver(siteInputSchema),
-    defaultValues: { customerId: site?.customerId ?? '', name: site?.name ?? '', address: site?.address ?? '', city: site?.city ?? '' },
-  });
-  const onSubmit = handleSubmit(async (values) => {
-    try {
-      await save.mutateAsync({ id: site?.id ?? null, values });
-      onDone();
-    } catch (error) {
-      applyServerErrors({ setError }, error, NAMES);
-    }
-  });
   return (
-    <RecordForm title={site ? `Edit ${site.name}` : 'Add a site'} onSubmit={() => void onSubmit()} onCancel={onDone} busy={save.isPending} error={save.error}>
+    <RecordForm title={site ? `Edit ${site.name}` : 'Add a site'} onSubmit={onSubmit} onCancel={onDone} busy={save.isPending} error={save.error}>
       <Field label="Customer" error={errors.customerId?.message} hint={customers.isPending ? 'Loading customers…' : undefined}>
-        <Select {...register('customerId')}>
+        <Select {...register('customerId')} options={customers.data?.items.map((c) => ({ value: String(c.id), label: c.name }))}>
           <option value="">Pick the customer</option>
-          {customers.data?.items.map((c) => (
-            <option key={c.id} value={c.id}>
-              {c.name}
-            </option>
-          ))}
         </Select>
       </Field>
       <Field label="Site name" error={errors.name?.message}>

@@ -5,13 +5,15 @@ import { bandSetValuesSchema, withoutBlankOptionals, type BandSetValues } from '
 import { CIRCUITS } from '@shared/schemas/reading';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
+import { CheckboxCard } from '@/components/ui/checkbox-card';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
+import { Textarea } from '@/components/ui/textarea';
 import { errorMessage, isApiError } from '@/lib/api-error';
 import { bandSetsApi } from '@/api/band-sets';
+import { NumberWithUnit } from '@/components/ui/number-with-unit';
 import { FORM_MESSAGES } from '../lib/form-messages';
 import { JudgementPreview } from './judgement-preview';
-import { NumberField } from './number-field';
 import { VoltageRangeFields } from './voltage-range-fields';
 import { WindingBandFields } from './winding-band-fields';
 
@@ -72,8 +74,8 @@ export function BandSetForm({ record, editable }: BandSetFormProps) {
           <TextInput {...register('label')} />
         </Field>
         <div className="grid gap-4 sm:grid-cols-2">
-          <NumberField label="Reference temperature" unit="°C" hint="Readings are corrected to this winding temperature" error={errors.referenceTemperatureC?.message} registration={register('referenceTemperatureC', num)} />
-          <NumberField label="Stator balance limit" unit="%" hint="Flag stators that differ by more than this" error={errors.statorBalancePercent?.message} registration={register('statorBalancePercent', num)} />
+          <NumberWithUnit label="Reference temperature" unit="°C" hint="Readings are corrected to this winding temperature" error={errors.referenceTemperatureC?.message} registration={register('referenceTemperatureC', num)} />
+          <NumberWithUnit label="Stator balance limit" unit="%" hint="Flag stators that differ by more than this" error={errors.statorBalancePercent?.message} registration={register('statorBalancePercent', num)} />
         </div>
         {CIRCUITS.map((circuit) => (
           <WindingBandFields key={circuit} circuit={circuit} register={register} errors={errors} />
@@ -83,22 +85,15 @@ export function BandSetForm({ record, editable }: BandSetFormProps) {
         <fieldset className="space-y-4 rounded-lg border border-surface-line p-4">
           <legend className="px-1 text-xl font-semibold text-ink">Transformation ratio and excitation frequency (optional)</legend>
           <div className="grid gap-4 sm:grid-cols-3">
-            <NumberField label="Ratio lowest" unit="" error={errors.transformationRatio?.min?.message} registration={register('transformationRatio.min', num)} />
-            <NumberField label="Ratio highest" unit="" error={errors.transformationRatio?.max?.message} registration={register('transformationRatio.max', num)} />
-            <NumberField label="Ratio near-edge margin" unit="%" error={errors.transformationRatio?.nearEdgePercent?.message} registration={register('transformationRatio.nearEdgePercent', num)} />
+            <NumberWithUnit label="Ratio lowest" unit="" error={errors.transformationRatio?.min?.message} registration={register('transformationRatio.min', num)} />
+            <NumberWithUnit label="Ratio highest" unit="" error={errors.transformationRatio?.max?.message} registration={register('transformationRatio.max', num)} />
+            <NumberWithUnit label="Ratio near-edge margin" unit="%" error={errors.transformationRatio?.nearEdgePercent?.message} registration={register('transformationRatio.nearEdgePercent', num)} />
           </div>
-          <NumberField label="Excitation frequency" unit="Hz" hint="The meter's AC bandwidth must cover it" error={errors.excitationFrequencyHz?.message} registration={register('excitationFrequencyHz', num)} />
+          <NumberWithUnit label="Excitation frequency" unit="Hz" hint="The meter's AC bandwidth must cover it" error={errors.excitationFrequencyHz?.message} registration={register('excitationFrequencyHz', num)} />
         </fieldset>
-        <label className="flex min-h-touch items-center gap-3 text-lg text-ink">
-          <input type="checkbox" className="h-6 w-6" {...register('invented')} />
-          These are invented demo values, not a manufacturer’s figures
-        </label>
+        <CheckboxCard label="These are invented demo values, not a manufacturer’s figures" registration={register('invented')} />
         <Field label="Note" hint="Where the values come from" error={errors.note?.message}>
-          <textarea
-            rows={3}
-            className="block w-full rounded-lg border-2 border-surface-edge bg-surface-raised p-3 text-lg text-ink focus:border-accent focus:outline-none focus:ring-[3px] focus:ring-accent/40"
-            {...register('note')}
-          />
+          <Textarea rows={3} {...register('note')} />
         </Field>
         </fieldset>
         {editable && (

@@ -1,9 +1,13 @@
 import { get, type FieldErrors, type UseFormRegister } from 'react-hook-form';
 import type { FirmwareRulesDraftInput } from '@shared/schemas/admin-reference';
 import { Button } from '@/components/ui/button';
+import { FieldError } from '@/components/ui/field-error';
+import { Select } from '@/components/ui/select';
+import { TextInput } from '@/components/ui/text-input';
 import { cn } from '@/lib/cn';
 
-const cell = 'block min-h-touch w-full rounded-md border-2 border-surface-edge bg-surface-raised px-2 text-lg text-ink aria-[invalid=true]:border-verdict-out_of_band focus:border-accent focus:outline-none';
+// The kit's controls, narrowed to fit a table cell.
+const cell = 'rounded-md px-2';
 const blankIsUnset = (v: unknown) => (typeof v === 'string' && v.trim() === '' ? undefined : typeof v === 'string' ? v.trim() : v);
 
 interface Props {
@@ -23,18 +27,14 @@ export function FirmwareRuleRow({ index, register, errors, editable, onRemove }:
     const errorId = `rule-${index}-${name}-error`;
     return (
       <td className="p-1.5 align-top">
-        <input
+        <TextInput
           aria-label={`Rule ${index + 1}: ${label}`}
           aria-invalid={message ? true : undefined}
           aria-describedby={message ? errorId : undefined}
           className={cell}
           {...register(path as `rules.${number}.key`, extra)}
         />
-        {message && (
-          <p id={errorId} role="alert" className="mt-1 text-base font-medium text-verdict-out_of_band">
-            ✕ {message}
-          </p>
-        )}
+        <FieldError id={errorId} message={message} />
       </td>
     );
   };
@@ -46,10 +46,10 @@ export function FirmwareRuleRow({ index, register, errors, editable, onRemove }:
       {input('monitorModule.from', 'monitor module from', { setValueAs: blankIsUnset })}
       {input('monitorModule.before', 'monitor module before', { setValueAs: blankIsUnset })}
       <td className="p-1.5 align-top">
-        <select aria-label={`Rule ${index + 1}: works together`} className={cell} {...register(`${base}.compatible`, { setValueAs: (v: unknown) => v === true || v === 'true' })}>
+        <Select aria-label={`Rule ${index + 1}: works together`} className={cell} {...register(`${base}.compatible`, { setValueAs: (v: unknown) => v === true || v === 'true' })}>
           <option value="true">Compatible</option>
           <option value="false">Not compatible</option>
-        </select>
+        </Select>
       </td>
       {input('note', 'note')}
       <td className="p-1.5 text-center align-top">

@@ -3,6 +3,7 @@ import { judgeEntry, type EntryJudgement } from '@shared/domain/judge-entry';
 import { bandSetValuesSchema } from '@shared/schemas/band-set';
 import { CIRCUIT_LEADS, type Circuit } from '@shared/schemas/reading';
 import { Field } from '@/components/ui/field';
+import { Select } from '@/components/ui/select';
 import { TextInput } from '@/components/ui/text-input';
 import { VerdictMark } from '@/components/ui/verdict-mark';
 
@@ -48,23 +49,9 @@ export function JudgementPreview({ bands }: { bands: unknown }) {
         Preview a judgement
       </h2>
       <p className="text-base text-ink-muted">Try a value against these bands before publishing. Nothing is saved.</p>
-      <div className="space-y-1.5">
-        <label htmlFor={targetId} className="block text-lg font-semibold text-ink">
-          Reading
-        </label>
-        <select
-          id={targetId}
-          value={target}
-          onChange={(e) => setTarget(e.target.value as Target)}
-          className="block min-h-touch w-full rounded-lg border-2 border-surface-edge bg-surface-raised px-3 text-lg text-ink focus:border-accent focus:outline-none focus:ring-[3px] focus:ring-accent/40"
-        >
-          {TARGETS.map((t) => (
-            <option key={t.value} value={t.value}>
-              {t.label}
-            </option>
-          ))}
-        </select>
-      </div>
+      <Field label="Reading">
+        <Select id={targetId} value={target} onChange={(e) => setTarget(e.target.value as Target)} options={TARGETS} />
+      </Field>
       <Field label={target === 'stator_pair' ? 'S1–S3 as the meter shows it' : 'Value as the meter shows it'} hint={resistance ? 'For example 98.5, 0.1 kΩ or OL' : 'For example 4.2 or 4200 mV'}>
         <TextInput value={entered} onChange={(e) => setEntered(e.target.value)} autoComplete="off" spellCheck={false} />
       </Field>

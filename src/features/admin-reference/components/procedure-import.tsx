@@ -4,6 +4,7 @@ import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
+import { Textarea } from '@/components/ui/textarea';
 import { errorMessage } from '@/lib/api-error';
 import { proceduresApi, useCheckProcedure } from '@/api/procedures';
 import { ProcedureDiagram } from './procedure-diagram';
@@ -76,13 +77,7 @@ export function ProcedureImport({ onImported }: { onImported: (id: number) => vo
         <input id={fileId} type="file" accept="application/json,.json" onChange={(e) => void onFile(e)} className="block min-h-touch text-lg text-ink file:mr-4 file:min-h-touch file:rounded-lg file:border-2 file:border-surface-edge file:bg-surface-raised file:px-4 file:text-lg file:font-semibold" />
       </div>
       <Field label="Or paste the JSON" error={jsonError ?? undefined}>
-        <textarea
-          rows={12}
-          value={text}
-          onChange={(e) => setText(e.target.value)}
-          spellCheck={false}
-          className="block w-full rounded-lg border-2 border-surface-edge bg-surface-raised p-3 font-mono text-base text-ink focus:border-accent focus:outline-none focus:ring-[3px] focus:ring-accent/40"
-        />
+        <Textarea rows={12} value={text} onChange={(e) => setText(e.target.value)} spellCheck={false} className="font-mono text-base" />
       </Field>
       <div className="grid gap-4 sm:grid-cols-2">
         <Field label="Procedure key" hint="Lower-case words joined by hyphens; a new version is made under the same key" error={fieldError('key')}>

@@ -1,6 +1,6 @@
 import { get, type FieldErrors, type UseFormRegister } from 'react-hook-form';
 import type { BandSetValues } from '@shared/schemas/band-set';
-import { NumberField } from './number-field';
+import { NumberWithUnit } from '@/components/ui/number-with-unit';
 
 interface Props {
   name: 'excitation' | 'statorOutputMagnitude';
@@ -17,9 +17,9 @@ export function VoltageRangeFields({ name, title, register, errors }: Props) {
     <fieldset className="space-y-4 rounded-lg border border-surface-line p-4">
       <legend className="px-1 text-xl font-semibold text-ink">{title}</legend>
       <div className="grid gap-4 sm:grid-cols-3">
-        <NumberField label="Lowest" unit="V RMS" error={error('min')} registration={register(`${name}.min`, num)} />
-        <NumberField label="Highest" unit="V RMS" error={error('max')} registration={register(`${name}.max`, num)} />
-        <NumberField label="Near-edge margin" unit="%" error={error('nearEdgePercent')} registration={register(`${name}.nearEdgePercent`, num)} />
+        <NumberWithUnit label="Lowest" unit="V RMS" error={error('min')} registration={register(`${name}.min`, num)} />
+        <NumberWithUnit label="Highest" unit="V RMS" error={error('max')} registration={register(`${name}.max`, num)} />
+        <NumberWithUnit label="Near-edge margin" unit="%" error={error('nearEdgePercent')} registration={register(`${name}.nearEdgePercent`, num)} />
       </div>
     </fieldset>
   );

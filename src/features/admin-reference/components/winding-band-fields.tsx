@@ -1,7 +1,7 @@
 import { get, type FieldErrors, type UseFormRegister } from 'react-hook-form';
 import type { BandSetValues } from '@shared/schemas/band-set';
 import { CIRCUIT_LEADS, type Circuit } from '@shared/schemas/reading';
-import { NumberField } from './number-field';
+import { NumberWithUnit } from '@/components/ui/number-with-unit';
 
 export const CIRCUIT_NAMES: Record<Circuit, string> = { rotor: 'Rotor', stator_1: 'Stator 1', stator_2: 'Stator 2' };
 
@@ -22,11 +22,11 @@ export function WindingBandFields({ circuit, register, errors }: Props) {
         {CIRCUIT_NAMES[circuit]} winding ({CIRCUIT_LEADS[circuit]})
       </legend>
       <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
-        <NumberField label="Nominal" unit="Ω" error={error('nominal')} registration={register(`${path}.nominal`, num)} />
-        <NumberField label="In band within" unit="± %" error={error('inBandPercent')} registration={register(`${path}.inBandPercent`, num)} />
-        <NumberField label="Near edge within" unit="± %" hint="Wider than in band" error={error('nearEdgePercent')} registration={register(`${path}.nearEdgePercent`, num)} />
-        <NumberField label="Short below" unit="Ω" error={error('shortBelow')} registration={register(`${path}.shortBelow`, num)} />
-        <NumberField label="Open above" unit="Ω" error={error('openAbove')} registration={register(`${path}.openAbove`, num)} />
+        <NumberWithUnit label="Nominal" unit="Ω" error={error('nominal')} registration={register(`${path}.nominal`, num)} />
+        <NumberWithUnit label="In band within" unit="± %" error={error('inBandPercent')} registration={register(`${path}.inBandPercent`, num)} />
+        <NumberWithUnit label="Near edge within" unit="± %" hint="Wider than in band" error={error('nearEdgePercent')} registration={register(`${path}.nearEdgePercent`, num)} />
+        <NumberWithUnit label="Short below" unit="Ω" error={error('shortBelow')} registration={register(`${path}.shortBelow`, num)} />
+        <NumberWithUnit label="Open above" unit="Ω" error={error('openAbove')} registration={register(`${path}.openAbove`, num)} />
       </div>
     </fieldset>
   );

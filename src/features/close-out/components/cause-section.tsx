@@ -1,9 +1,9 @@
-import { useFormContext } from 'react-hook-form';
 import type { FindingStep } from '@shared/schemas/procedure';
 import { CAUSE_LABELS } from '@shared/schemas/visit';
 import type { VisitDetail } from '@shared/schemas/visit-detail';
-import type { CloseOutFields } from '../utils/close-out-values';
+import { useCloseOutForm } from '../hooks/use-close-out-form';
 import { RadioCards, type RadioCardOption } from '@/components/ui/radio-cards';
+import { Section } from '@/components/ui/section';
 
 /** The finding the procedure reached, from the procedure version this visit pinned. */
 export function reachedFinding(visit: VisitDetail): FindingStep | undefined {
@@ -14,10 +14,7 @@ export function reachedFinding(visit: VisitDetail): FindingStep | undefined {
 
 /** Root cause: the engine suggests, the technician decides. */
 export function CauseSection({ visit }: { visit: VisitDetail }) {
-  const {
-    register,
-    formState: { errors },
-  } = useFormContext<CloseOutFields>();
+  const { register, errors } = useCloseOutForm();
   const suggestion = visit.likelyCauses.ranked[0];
   const finding = reachedFinding(visit);
 
@@ -43,10 +40,7 @@ export function CauseSection({ visit }: { visit: VisitDetail }) {
   });
 
   return (
-    <section aria-labelledby="close-out-cause" className="space-y-4">
-      <h2 id="close-out-cause" className="text-2xl font-bold text-ink">
-        Root cause
-      </h2>
+    <Section variant="form" title="Root cause">
       {finding && (
         <div className="rounded-lg border-2 border-surface-line bg-surface-raised p-4 text-lg text-ink">
           <p>
@@ -63,6 +57,6 @@ export function CauseSection({ visit }: { visit: VisitDetail }) {
         error={errors.causeCategory?.message}
         registration={register('causeCategory')}
       />
-    </section>
+    </Section>
   );
 }

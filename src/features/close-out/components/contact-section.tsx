@@ -1,21 +1,15 @@
-import { Controller, useFormContext } from 'react-hook-form';
+import { Controller } from 'react-hook-form';
 import { Field } from '@/components/ui/field';
+import { Section } from '@/components/ui/section';
 import { TextInput } from '@/components/ui/text-input';
-import type { CloseOutFields } from '../utils/close-out-values';
+import { useCloseOutForm } from '../hooks/use-close-out-form';
 import { SignaturePad } from './signature-pad';
 
 /** Who signs for the customer, where the report goes, and the signature itself. */
 export function ContactSection() {
-  const {
-    register,
-    control,
-    formState: { errors },
-  } = useFormContext<CloseOutFields>();
+  const { register, control, errors } = useCloseOutForm();
   return (
-    <section aria-labelledby="close-out-contact" className="space-y-4">
-      <h2 id="close-out-contact" className="text-2xl font-bold text-ink">
-        Customer sign-off
-      </h2>
+    <Section variant="form" title="Customer sign-off">
       <div className="grid gap-4 sm:grid-cols-2">
         <Field label="Contact name" hint="The person at the plant who signs." error={errors.contactName?.message}>
           <TextInput autoComplete="off" {...register('contactName')} />
@@ -38,6 +32,6 @@ export function ContactSection() {
           />
         )}
       />
-    </section>
+    </Section>
   );
 }

@@ -1,23 +1,18 @@
-import { useFieldArray, useFormContext } from 'react-hook-form';
+import { useFieldArray } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
+import { Section } from '@/components/ui/section';
 import { TextInput } from '@/components/ui/text-input';
-import { emptyAsAbsent, newPartRow, type CloseOutFields } from '../utils/close-out-values';
+import { useCloseOutForm } from '../hooks/use-close-out-form';
+import { emptyAsAbsent, newPartRow } from '../utils/close-out-values';
 
 /** Parts fitted on this visit, with the serials that came out and went in. */
 export function PartsSection() {
-  const {
-    control,
-    register,
-    formState: { errors },
-  } = useFormContext<CloseOutFields>();
+  const { control, register, errors } = useCloseOutForm();
   const { fields, append, remove } = useFieldArray({ control, name: 'parts', keyName: 'rowKey' });
 
   return (
-    <section aria-labelledby="close-out-parts" className="space-y-4">
-      <h2 id="close-out-parts" className="text-2xl font-bold text-ink">
-        Parts used
-      </h2>
+    <Section variant="form" title="Parts used">
       {fields.length === 0 && <p className="text-lg text-ink-muted">No parts listed. Add each part you fitted, one row per part number.</p>}
       {fields.map((row, index) => {
         const rowErrors = errors.parts?.[index];
@@ -52,6 +47,6 @@ export function PartsSection() {
       <Button variant="secondary" size="lg" onClick={() => append(newPartRow())}>
         <span aria-hidden="true">+</span> Add a part
       </Button>
-    </section>
+    </Section>
   );
 }

@@ -1,27 +1,22 @@
-import { useFormContext, useWatch } from 'react-hook-form';
+import { useWatch } from 'react-hook-form';
 import { Field } from '@/components/ui/field';
+import { Section } from '@/components/ui/section';
 import { SafetyNotice } from '@/components/ui/safety-notice';
 import { TextInput } from '@/components/ui/text-input';
-import { emptyAsAbsent, type CloseOutFields } from '../utils/close-out-values';
+import { useCloseOutForm } from '../hooks/use-close-out-form';
+import { emptyAsAbsent } from '../utils/close-out-values';
 import { CheckboxCard } from '@/components/ui/checkbox-card';
 import { RadioCards } from '@/components/ui/radio-cards';
 import { SafetyDistanceNote } from './safety-distance-note';
 
 /** The post-repair checks that must pass before the press goes back to production. */
 export function ReturnToServiceSection() {
-  const {
-    register,
-    control,
-    formState: { errors },
-  } = useFormContext<CloseOutFields>();
+  const { register, control, errors } = useCloseOutForm();
   const rts = errors.returnToService;
   const stoppingTime = useWatch({ control, name: 'returnToService.stoppingTimeMs' });
 
   return (
-    <section aria-labelledby="close-out-rts" className="space-y-4">
-      <h2 id="close-out-rts" className="text-2xl font-bold text-ink">
-        Return to service
-      </h2>
+    <Section variant="form" title="Return to service">
       <SafetyNotice level="warning">
         A press returned to production with a wrong crank-angle reading or a slow brake can stroke when nobody expects it and
         crush or amputate. Confirm each check below yourself, on this press, before it runs production again; remove locks
@@ -54,6 +49,6 @@ export function ReturnToServiceSection() {
         error={rts?.presenceSensingDistanceOk?.message}
         registration={register('returnToService.presenceSensingDistanceOk')}
       />
-    </section>
+    </Section>
   );
 }

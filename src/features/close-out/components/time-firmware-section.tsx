@@ -1,14 +1,12 @@
-import { useFormContext, useWatch } from 'react-hook-form';
+import { useWatch } from 'react-hook-form';
 import { Field } from '@/components/ui/field';
+import { Section } from '@/components/ui/section';
 import { TextInput } from '@/components/ui/text-input';
-import { emptyAsAbsent, hoursAndMinutes, type CloseOutFields } from '../utils/close-out-values';
+import { useCloseOutForm } from '../hooks/use-close-out-form';
+import { emptyAsAbsent, hoursAndMinutes } from '../utils/close-out-values';
 
 function MinutesField({ name, label }: { name: 'labourMinutes' | 'travelMinutes'; label: string }) {
-  const {
-    register,
-    control,
-    formState: { errors },
-  } = useFormContext<CloseOutFields>();
+  const { register, control, errors } = useCloseOutForm();
   const hours = hoursAndMinutes(useWatch({ control, name }));
   return (
     <Field label={label} hint={hours ? `= ${hours} (hours:minutes)` : 'Whole minutes, e.g. 90 for 1:30'} error={errors[name]?.message}>
@@ -19,15 +17,9 @@ function MinutesField({ name, label }: { name: 'labourMinutes' | 'travelMinutes'
 
 /** Time on the job and the firmware the press was left with. */
 export function TimeFirmwareSection() {
-  const {
-    register,
-    formState: { errors },
-  } = useFormContext<CloseOutFields>();
+  const { register, errors } = useCloseOutForm();
   return (
-    <section aria-labelledby="close-out-time" className="space-y-4">
-      <h2 id="close-out-time" className="text-2xl font-bold text-ink">
-        Time and firmware
-      </h2>
+    <Section variant="form" title="Time and firmware">
       <div className="grid gap-4 sm:grid-cols-2">
         <MinutesField name="labourMinutes" label="Labour minutes" />
         <MinutesField name="travelMinutes" label="Travel minutes" />
@@ -40,6 +32,6 @@ export function TimeFirmwareSection() {
           <TextInput inputMode="decimal" spellCheck={false} {...register('monitorFirmwareLeft')} />
         </Field>
       </div>
-    </section>
+    </Section>
   );
 }

@@ -1,25 +1,20 @@
-import { useFormContext } from 'react-hook-form';
 import { Field } from '@/components/ui/field';
+import { Section } from '@/components/ui/section';
 import { Textarea } from '@/components/ui/textarea';
-import { emptyAsAbsent, type CloseOutFields } from '../utils/close-out-values';
+import { useCloseOutForm } from '../hooks/use-close-out-form';
+import { emptyAsAbsent } from '../utils/close-out-values';
 
 /** What was done and what the customer should do next. */
 export function WorkSection() {
-  const {
-    register,
-    formState: { errors },
-  } = useFormContext<CloseOutFields>();
+  const { register, errors } = useCloseOutForm();
   return (
-    <section aria-labelledby="close-out-work" className="space-y-4">
-      <h2 id="close-out-work" className="text-2xl font-bold text-ink">
-        Work done
-      </h2>
+    <Section variant="form" title="Work done">
       <Field label="Actions taken" hint="What you repaired, replaced, set or re-tested." error={errors.actionsTaken?.message}>
         <Textarea className="min-h-32" rows={4} {...register('actionsTaken')} />
       </Field>
       <Field label="Recommendations (optional)" hint="What the plant should watch or plan, e.g. a spare sensor on the shelf." error={errors.recommendations?.message}>
         <Textarea className="min-h-32" rows={3} {...register('recommendations', { setValueAs: emptyAsAbsent })} />
       </Field>
-    </section>
+    </Section>
   );
 }

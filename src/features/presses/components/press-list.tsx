@@ -1,9 +1,5 @@
 import { useQuery } from '@tanstack/react-query';
-import { Banner } from '@/components/ui/banner';
-import { Button } from '@/components/ui/button';
-import { LoadError } from '@/components/ui/load-error';
-import { Pager } from '@/components/ui/pager';
-import { Spinner } from '@/components/ui/spinner';
+import { PagedList } from '@/components/ui/paged-list';
 import { pressListOptions } from '@/api/presses';
 import { PressCard } from './press-card';
 
@@ -16,40 +12,18 @@ interface PressListProps {
 }
 
 export function PressList({ q, page, onPageChange }: PressListProps) {
-  const { data, error, isPending, isError, isPlaceholderData, refetch } = useQuery(
-    pressListOptions({ q, page, pageSize: PRESS_PAGE_SIZE }),
-  );
-
-  if (isPending) return <Spinner label="Loading presses…" />;
-  if (isError) return <LoadError error={error} what="presses" onRetry={() => void refetch()} />;
-
-  if (data.items.length === 0) {
-    if (data.total > 0) {
-      return (
-        <Banner title={`There is no page ${page}.`} action={<Button variant="secondary" onClick={() => onPageChange(1)}>Go to the first page</Button>}>
-          The list has {data.total} presses on fewer pages.
-        </Banner>
-      );
-    }
-    return (
-      <Banner role="status" title={q ? `No press matches “${q}”.` : 'No presses have been added yet.'}>
-        {q
-          ? 'Check the asset tag on the press, or search by model, customer or site instead.'
-          : 'A service manager or administrator adds presses for each customer site.'}
-      </Banner>
-    );
-  }
-
+  const query = useQuery(pressListOptions({ q, page, pageSize: PRESS_PAGE_SIZE }));
   return (
-    <div aria-busy={isPlaceholderData}>
-      <ul className="space-y-4" aria-label="Presses">
-        {data.items.map((press) => (
-          <li key={press.id}>
-            <PressCard press={press} />
-          </li>
-        ))}
-      </ul>
-      <Pager page={data.page} pageSize={data.pageSize} total={data.total} noun="presses" onPageChange={onPageChange} />
-    </div>
+    <PagedList
+      query={query}
+      q={q}
+      page={page}
+      onPageChange={onPageChange}
+      noun="presses"
+      noMatch={{ title: `No press matches “${q}”.`, body: 'Check the asset tag on the press, or search by model, customer or site instead.' }}
+      nothingYet={{ title: 'No presses have been added yet.', body: 'A service manager or administrator adds presses for each customer site.' }}
+      itemKey={(press) => press.id}
+      renderItem={(press) => <PressCard press={press} />}
+    />
   );
 }

@@ -1,13 +1,13 @@
 import { RECORD_SECTIONS as S, RECORD_WORDS as W, stoppingTimeLine } from '@shared/record/record-wording';
 import type { VisitRecord } from '@shared/schemas/visit-record';
 import { SafetyNotice } from '@/components/ui/safety-notice';
-import { RecordSection } from './record-section';
+import { Section } from '@/components/ui/section';
 
 /** How the press was left, with each check confirmed before it went back to production. */
 export function RecordAsLeft({ record }: { record: VisitRecord }) {
   const asLeft = record.asLeft;
   return (
-    <RecordSection title={S.asLeft}>
+    <Section title={S.asLeft}>
       {asLeft ? (
         <>
           <p className="text-lg font-semibold">{asLeft.label}</p>
@@ -27,13 +27,13 @@ export function RecordAsLeft({ record }: { record: VisitRecord }) {
       ) : (
         <p className="text-lg font-semibold">{W.checksNotRecorded}</p>
       )}
-    </RecordSection>
+    </Section>
   );
 }
 
 export function RecordSafety({ record }: { record: VisitRecord }) {
   return (
-    <RecordSection title={S.safety}>
+    <Section title={S.safety}>
       <div className="space-y-4">
         {record.safety.map((s) => (
           <SafetyNotice key={s.text} level={s.signalWord.toLowerCase() as 'danger' | 'warning' | 'caution'}>
@@ -43,6 +43,6 @@ export function RecordSafety({ record }: { record: VisitRecord }) {
         ))}
       </div>
       <p className="text-base text-ink-muted">{W.plantRulesFirst}</p>
-    </RecordSection>
+    </Section>
   );
 }

@@ -2,7 +2,8 @@ import { formatDateTime } from '@shared/format/date-time';
 import { formatMinutes } from '@shared/format/minutes';
 import { RECORD_LABELS as L, RECORD_SECTIONS as S, RECORD_WORDS as W } from '@shared/record/record-wording';
 import type { VisitRecord } from '@shared/schemas/visit-record';
-import { Facts, RecordSection } from './record-section';
+import { Section } from '@/components/ui/section';
+import { Facts } from './facts';
 
 /** Who, where, which press and when; the office's record also shows the status and the time to repair. */
 export function RecordFacts({ record, office }: { record: VisitRecord; office: boolean }) {
@@ -22,10 +23,10 @@ export function RecordFacts({ record, office }: { record: VisitRecord; office: b
           [L.bandSet, h.bandSetLine],
         ]}
       />
-      <RecordSection title={S.fault}>
+      <Section title={S.fault}>
         <p className="text-lg">{h.faultDisplayed}</p>
-      </RecordSection>
-      <RecordSection title={S.finding}>
+      </Section>
+      <Section title={S.finding}>
         <Facts
           rows={[
             [L.rootCause, record.work.cause.label],
@@ -33,7 +34,7 @@ export function RecordFacts({ record, office }: { record: VisitRecord; office: b
           ]}
         />
         {finding?.escalate && <p className="text-lg font-semibold">{W.escalated}</p>}
-      </RecordSection>
+      </Section>
     </>
   );
 }

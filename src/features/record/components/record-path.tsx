@@ -1,13 +1,13 @@
 import { formatDateTime } from '@shared/format/date-time';
 import { noLongerApplyNote, RECORD_SECTIONS as S, RECORD_WORDS as W } from '@shared/record/record-wording';
 import type { VisitRecord } from '@shared/schemas/visit-record';
-import { RecordSection } from './record-section';
+import { Section } from '@/components/ui/section';
 
 /** The route taken through the procedure, step by step, with what each safety gate confirmed, when and by whom. */
 export function RecordPath({ record }: { record: VisitRecord }) {
   const { steps, finding, noLongerApply } = record.path;
   return (
-    <RecordSection title={S.path}>
+    <Section title={S.path}>
       <p className="text-lg text-ink-muted">
         {record.header.procedure.title}, version {record.header.procedure.version}
       </p>
@@ -49,6 +49,6 @@ export function RecordPath({ record }: { record: VisitRecord }) {
         </ol>
       )}
       {noLongerApply > 0 && <p className="text-base text-ink-muted">{noLongerApplyNote(noLongerApply)}</p>}
-    </RecordSection>
+    </Section>
   );
 }

@@ -1,13 +1,13 @@
 import { photoLabel, RECORD_SECTIONS as S } from '@shared/record/record-wording';
 import type { VisitRecord } from '@shared/schemas/visit-record';
 import type { RecordPictureUrls } from './record-urls';
-import { RecordSection } from './record-section';
+import { Section } from '@/components/ui/section';
 
 /** Photo evidence as thumbnails; where the full picture can be opened, each opens in a new tab. */
 export function RecordPhotos({ record, urls }: { record: VisitRecord; urls: RecordPictureUrls }) {
   if (record.photos.length === 0) return null;
   return (
-    <RecordSection title={`${S.photos} (${record.photos.length})`}>
+    <Section title={`${S.photos} (${record.photos.length})`}>
       <ul className="grid grid-cols-2 gap-4 md:grid-cols-3">
         {record.photos.map((p, i) => {
           const label = photoLabel(i, p.caption, p.stepTitle);
@@ -32,6 +32,6 @@ export function RecordPhotos({ record, urls }: { record: VisitRecord; urls: Reco
           );
         })}
       </ul>
-    </RecordSection>
+    </Section>
   );
 }

@@ -2,13 +2,13 @@ import { RECORD_SECTIONS as S, RECORD_WORDS as W, replacedReadingsNote } from '@
 import type { VisitRecord } from '@shared/schemas/visit-record';
 import { ScrollRegion } from '@/components/ui/scroll-region';
 import { VerdictMark } from '@/components/ui/verdict-mark';
-import { RecordSection } from './record-section';
+import { Section } from '@/components/ui/section';
 
 /** Every reading that stands, with the server's verdict and the band of the pinned band-set version. */
 export function RecordReadings({ record }: { record: VisitRecord }) {
   const { items, replaced } = record.readings;
   return (
-    <RecordSection title={S.readings} aside={<p className="text-base text-ink-muted">Judged against {record.header.bandSetLine}</p>}>
+    <Section title={S.readings} aside={<p className="text-base text-ink-muted">Judged against {record.header.bandSetLine}</p>}>
       {items.length === 0 ? (
         <p className="text-lg text-ink-muted">{W.noReadings}</p>
       ) : (
@@ -51,6 +51,6 @@ export function RecordReadings({ record }: { record: VisitRecord }) {
         </ScrollRegion>
       )}
       {replaced > 0 && <p className="text-base text-ink-muted">{replacedReadingsNote(replaced)}</p>}
-    </RecordSection>
+    </Section>
   );
 }

@@ -2,22 +2,23 @@ import { formatMinutes } from '@shared/format/minutes';
 import { firmwareLine, recommendedByProcedure, RECORD_LABELS as L, RECORD_SECTIONS as S, RECORD_WORDS as W } from '@shared/record/record-wording';
 import type { VisitRecord } from '@shared/schemas/visit-record';
 import { ScrollRegion } from '@/components/ui/scroll-region';
-import { Facts, RecordSection } from './record-section';
+import { Section } from '@/components/ui/section';
+import { Facts } from './facts';
 
 /** Firmware as found and as left, the work with its parts and time, and the recommendations. */
 export function RecordWork({ record }: { record: VisitRecord }) {
   const { work, times, parts } = record;
   return (
     <>
-      <RecordSection title={S.firmware}>
+      <Section title={S.firmware}>
         <Facts
           rows={[
             [L.pressControl, firmwareLine(work.firmware.controlFound, work.firmware.controlLeft)],
             [L.monitorModule, firmwareLine(work.firmware.monitorFound, work.firmware.monitorLeft)],
           ]}
         />
-      </RecordSection>
-      <RecordSection title={S.work}>
+      </Section>
+      <Section title={S.work}>
         <Facts
           rows={[
             [L.actionsTaken, <span className="whitespace-pre-line">{work.actionsTaken ?? W.notRecorded}</span>],
@@ -54,11 +55,11 @@ export function RecordWork({ record }: { record: VisitRecord }) {
             </table>
           </ScrollRegion>
         )}
-      </RecordSection>
-      <RecordSection title={S.recommendations}>
+      </Section>
+      <Section title={S.recommendations}>
         <p className="whitespace-pre-line text-lg">{work.recommendations ?? W.noRecommendations}</p>
         {record.path.finding && <p className="text-lg text-ink-muted">{recommendedByProcedure(record.path.finding.recommendedAction)}</p>}
-      </RecordSection>
+      </Section>
     </>
   );
 }

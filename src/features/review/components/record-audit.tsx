@@ -1,6 +1,6 @@
 import type { AuditTrailEntry } from '@shared/schemas/manager-figures';
 import { formatDateTime } from '@shared/format/date-time';
-import { RecordSection } from './record-section';
+import { Section } from '@/components/ui/section';
 
 const ACTIONS: Record<string, string> = {
   visit_started: 'Started the visit',
@@ -25,7 +25,7 @@ const label = (action: string) => ACTIONS[action] ?? action.replace(/_/g, ' ');
 /** Who did what and when on this visit, oldest first; review comments are shown in full. */
 export function RecordAudit({ entries, timeZone }: { entries: AuditTrailEntry[]; timeZone: string }) {
   return (
-    <RecordSection title="Audit trail">
+    <Section variant="card" title="Audit trail">
       <ol className="space-y-1.5">
         {entries.map((e) => {
           const comment = typeof e.detail.comment === 'string' ? e.detail.comment : null;
@@ -37,6 +37,6 @@ export function RecordAudit({ entries, timeZone }: { entries: AuditTrailEntry[];
           );
         })}
       </ol>
-    </RecordSection>
+    </Section>
   );
 }

@@ -4,7 +4,7 @@ import { Button } from '@/components/ui/button';
 import { ApiError } from '@/lib/api-error';
 import type { EmailDto } from '@shared/schemas/email';
 import { useResendEmail } from '@/api/emails';
-import { RecordSection } from './record-section';
+import { Section } from '@/components/ui/section';
 
 interface RecordEmailsProps {
   emails: EmailDto[] | undefined;
@@ -43,7 +43,7 @@ export function RecordEmails({ emails, loading, failed, timeZone }: RecordEmails
       </ul>
     );
   return (
-    <RecordSection title="E-mails sent">
+    <Section variant="card" title="E-mails sent">
       {body}
       {resend.isError && (
         <p role="alert" className="mt-2 text-lg text-verdict-out_of_band">
@@ -51,6 +51,6 @@ export function RecordEmails({ emails, loading, failed, timeZone }: RecordEmails
         </p>
       )}
       {resend.isSuccess && <p className="mt-2 text-lg text-ink">Queued again: it goes out with the next outbox run.</p>}
-    </RecordSection>
+    </Section>
   );
 }

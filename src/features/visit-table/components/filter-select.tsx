@@ -15,13 +15,8 @@ interface FilterSelectProps {
 export function FilterSelect({ label, value, onChange, options, anyLabel, disabled, hint }: FilterSelectProps) {
   return (
     <Field label={label} hint={hint}>
-      <Select value={value} disabled={disabled} onChange={(e) => onChange(e.target.value)} className="disabled:opacity-60">
+      <Select value={value} disabled={disabled} onChange={(e) => onChange(e.target.value)} options={options} className="disabled:opacity-60">
         <option value="">{anyLabel}</option>
-        {options.map((o) => (
-          <option key={o.value} value={o.value}>
-            {o.label}
-          </option>
-        ))}
       </Select>
     </Field>
   );

@@ -2,6 +2,7 @@ import { VISIT_STATUS_LABELS } from '@shared/format/labels';
 import { useQuery } from '@tanstack/react-query';
 import { useId } from 'react';
 import { CAUSE_LABELS, VISIT_STATUSES } from '@shared/schemas/visit';
+import { ChoiceChips } from '@/components/ui/choice-chips';
 import { SearchBox } from '@/components/ui/search-box';
 import { TextInput } from '@/components/ui/text-input';
 import { customerListOptions } from '@/api/customers';
@@ -10,6 +11,8 @@ import { siteListOptions } from '@/api/sites';
 import { technicianOptions, type VisitTableRequest } from '@/api/visit-table';
 import type { VisitTableParam } from '../hooks/use-visit-table-params';
 import { FilterSelect } from './filter-select';
+
+const STATUS_OPTIONS = VISIT_STATUSES.map((status) => ({ value: status, label: VISIT_STATUS_LABELS[status] }));
 
 // Every choice in one request; the choices change seldom, and the list must not show the previous
 // customer's sites while the next customer's load.
@@ -39,17 +42,7 @@ export function VisitTableFilters({ request, onChange }: VisitTableFiltersProps)
   return (
     <div className="space-y-5 rounded-xl border border-surface-line bg-surface-raised p-5">
       <SearchBox label="Search visits" hint="Visit number, fault text, actions, press, customer, site or technician" value={request.q ?? ''} onSearch={(text) => onChange('q', text)} />
-      <fieldset>
-        <legend className="mb-2 text-lg font-semibold text-ink">Status</legend>
-        <div className="flex flex-wrap gap-3">
-          {VISIT_STATUSES.map((status) => (
-            <label key={status} className="flex min-h-touch cursor-pointer items-center gap-3 rounded-lg border-2 border-surface-line px-4 text-lg has-[:checked]:border-accent has-[:checked]:bg-accent-soft">
-              <input type="checkbox" className="h-6 w-6 accent-accent" checked={statuses.includes(status)} onChange={(e) => toggleStatus(status, e.target.checked)} />
-              {VISIT_STATUS_LABELS[status]}
-            </label>
-          ))}
-        </div>
-      </fieldset>
+      <ChoiceChips legend="Status" options={STATUS_OPTIONS} selected={statuses} onToggle={toggleStatus} />
       <div className="grid gap-4 md:grid-cols-3">
         <FilterSelect label="Customer" anyLabel="All customers" value={customerId} onChange={(v) => onChange('customerId', v)} options={(customers.data?.items ?? []).map((c) => ({ value: String(c.id), label: c.name }))} />
         <FilterSelect

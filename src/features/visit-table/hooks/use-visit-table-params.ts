@@ -1,7 +1,7 @@
 import { useCallback, useMemo } from 'react';
-import { useSearchParams } from 'react-router-dom';
 import type { VisitTableSort } from '@shared/schemas/visit-table';
 import type { VisitTableRequest } from '@/api/visit-table';
+import { pageParam, useSearchParamUpdates } from '@/lib/use-list-params';
 
 const KEYS = ['status', 'customerId', 'siteId', 'pressId', 'technicianId', 'cause', 'from', 'to', 'q', 'sort', 'dir', 'page'] as const;
 export type VisitTableParam = (typeof KEYS)[number];
@@ -14,7 +14,7 @@ const officeZone = () => Intl.DateTimeFormat().resolvedOptions().timeZone || 'UT
 
 /** Filters, sort and page of the all-visits table, kept in the address so back, forward and shared links work. */
 export function useVisitTableParams() {
-  const [params, setParams] = useSearchParams();
+  const { params, update, setParams } = useSearchParamUpdates();
 
   const request = useMemo<VisitTableRequest>(() => {
     const r: VisitTableRequest = { pageSize: '25', tz: officeZone() };
@@ -25,42 +25,19 @@ export function useVisitTableParams() {
     return r;
   }, [params]);
 
+  // Any change of filter or sort starts again at the first page.
   const setFilter = useCallback(
-    (key: VisitTableParam, value: string) =>
-      setParams((current) => {
-        const next = new URLSearchParams(current);
-        if (value) next.set(key, value);
-        else next.delete(key);
-        for (const dependent of DEPENDENTS[key] ?? []) next.delete(dependent);
-        next.delete('page');
-        return next;
-      }),
-    [setParams],
+    (key: VisitTableParam, value: string) => {
+      const cleared = Object.fromEntries((DEPENDENTS[key] ?? []).map((dependent) => [dependent, null]));
+      update({ [key]: value, ...cleared, page: null });
+    },
+    [update],
   );
 
   /** A click on a column header: first descending for dates and numbers people scan newest/largest first, then flips. */
-  const setSort = useCallback(
-    (sort: VisitTableSort, dir: 'asc' | 'desc') =>
-      setParams((current) => {
-        const next = new URLSearchParams(current);
-        next.set('sort', sort);
-        next.set('dir', dir);
-        next.delete('page');
-        return next;
-      }),
-    [setParams],
-  );
+  const setSort = useCallback((sort: VisitTableSort, dir: 'asc' | 'desc') => update({ sort, dir, page: null }), [update]);
 
-  const setPage = useCallback(
-    (page: number) =>
-      setParams((current) => {
-        const next = new URLSearchParams(current);
-        if (page > 1) next.set('page', String(page));
-        else next.delete('page');
-        return next;
-      }),
-    [setParams],
-  );
+  const setPage = useCallback((page: number) => update({ page: pageParam(page) }), [update]);
 
   const clearFilters = useCallback(() => setParams(new URLSearchParams()), [setParams]);
 

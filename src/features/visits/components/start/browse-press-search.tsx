@@ -13,6 +13,20 @@ import { PickList } from './pick-list';
 import { PressChoiceList } from './press-choice-list';
 import { SearchResults } from './search-results';
 
+/** A step already taken (the customer, the site) and the way back to change it. */
+function Chosen({ what, name, onChange }: { what: 'Customer' | 'Site'; name: string; onChange: () => void }) {
+  return (
+    <p className="flex flex-wrap items-center gap-3 text-lg text-ink">
+      <span>
+        {what}: <strong>{name}</strong>
+      </span>
+      <Button variant="quiet" onClick={onChange}>
+        Change {what.toLowerCase()}
+      </Button>
+    </p>
+  );
+}
+
 /** Customer, then site, then press: for when the asset tag is not to hand. */
 export function BrowsePressSearch({ onChoose }: { onChoose: (press: Press) => void }) {
   const [customer, setCustomer] = useState<Customer | null>(null);
@@ -30,26 +44,8 @@ export function BrowsePressSearch({ onChoose }: { onChoose: (press: Press) => vo
 
   return (
     <div className="space-y-3">
-      {customer && (
-        <p className="flex flex-wrap items-center gap-3 text-lg text-ink">
-          <span>
-            Customer: <strong>{customer.name}</strong>
-          </span>
-          <Button variant="quiet" onClick={() => back('customer')}>
-            Change customer
-          </Button>
-        </p>
-      )}
-      {site && (
-        <p className="flex flex-wrap items-center gap-3 text-lg text-ink">
-          <span>
-            Site: <strong>{site.name}</strong>
-          </span>
-          <Button variant="quiet" onClick={() => back('site')}>
-            Change site
-          </Button>
-        </p>
-      )}
+      {customer && <Chosen what="Customer" name={customer.name} onChange={() => back('customer')} />}
+      {site && <Chosen what="Site" name={site.name} onChange={() => back('site')} />}
       {!customer ? (
         <>
           <SearchBox key="customer" label="Customer" value={q} onSearch={setQ} />

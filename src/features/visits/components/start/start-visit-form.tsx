@@ -8,7 +8,7 @@ import type { VisitDetail } from '@shared/schemas/visit-detail';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
-import { FieldError } from '@/components/ui/field-error';
+import { RadioCards } from '@/components/ui/radio-cards';
 import { TextInput } from '@/components/ui/text-input';
 import { applyServerErrors } from '@/lib/apply-server-errors';
 import { errorMessage } from '@/lib/api-error';
@@ -84,17 +84,13 @@ export function StartVisitForm({ initialPress, onStarted }: { initialPress: Pres
             </Field>
           </div>
         </fieldset>
-        <fieldset className="space-y-2">
-          <legend className="text-lg font-semibold text-ink">Procedure</legend>
-          <label className="flex min-h-touch items-start gap-3 rounded-lg border-2 border-accent bg-surface-raised p-4 text-lg text-ink">
-            <input type="radio" value={suggestion.choice.key} className="mt-1 h-6 w-6 accent-accent" {...register('procedureKey')} />
-            <span>
-              <span className="block font-semibold">{suggestion.choice.title}</span>
-              <span className="block text-base text-ink-muted">{suggestion.because}</span>
-            </span>
-          </label>
-          <FieldError message={errors.procedureKey?.message} />
-        </fieldset>
+        <RadioCards
+          legend="Procedure"
+          columns={1}
+          options={[{ value: suggestion.choice.key, label: suggestion.choice.title, detail: suggestion.because }]}
+          error={errors.procedureKey?.message}
+          registration={register('procedureKey')}
+        />
         <Button type="submit" size="lg" disabled={isSubmitting || create.isPending}>
           {isSubmitting || create.isPending ? 'Starting…' : 'Start the visit'}
         </Button>

@@ -2,6 +2,7 @@ import { useState } from 'react';
 import type { SafetyGateStep } from '@shared/schemas/procedure';
 import type { StepResultRecord, VisitDetail } from '@shared/schemas/visit-detail';
 import { Button } from '@/components/ui/button';
+import { CheckboxCard } from '@/components/ui/checkbox-card';
 import type { StepAnswerVars } from '@/api/visits';
 import type { ResilientSave } from '../../hooks/use-resilient-save';
 import { formatWhen, type PersonNames } from '../../lib/step-records';
@@ -27,16 +28,13 @@ export function SafetyGateStepView({ step, result, answer, editable, names }: Sa
       <ul className="space-y-3">
         {step.confirmations.map((text, i) => (
           <li key={text}>
-            <label className="flex min-h-touch cursor-pointer items-start gap-4 rounded-lg border-2 border-surface-line bg-surface-raised p-4 text-lg text-ink has-[:checked]:border-accent">
-              <input
-                type="checkbox"
-                className="mt-0.5 h-8 w-8 shrink-0 accent-accent"
-                checked={confirmed || ticked[i]}
-                disabled={confirmed || !editable}
-                onChange={(e) => setTicked((all) => all.map((v, j) => (j === i ? e.target.checked : v)))}
-              />
-              <span>{text}</span>
-            </label>
+            <CheckboxCard
+              label={text}
+              align="start"
+              checked={confirmed || ticked[i]}
+              disabled={confirmed || !editable}
+              onChange={(e) => setTicked((all) => all.map((v, j) => (j === i ? e.target.checked : v)))}
+            />
           </li>
         ))}
       </ul>

@@ -31,13 +31,14 @@ export function StepInputFields({ inputs, values, errors, onChange, bandSets, re
         if (input.type === 'sensor_generation') {
           return (
             <Field key={input.key} label={label} error={errors[input.key]}>
-              <Select fit="medium" value={values[input.key] ?? ''} disabled={disabled} onChange={(e) => onChange(input.key, e.target.value)}>
+              <Select
+                fit="medium"
+                value={values[input.key] ?? ''}
+                disabled={disabled}
+                onChange={(e) => onChange(input.key, e.target.value)}
+                options={bandSets.map((b) => ({ value: b.generation, label: b.label }))}
+              >
                 <option value="">Not chosen</option>
-                {bandSets.map((b) => (
-                  <option key={b.generation} value={b.generation}>
-                    {b.label}
-                  </option>
-                ))}
               </Select>
             </Field>
           );

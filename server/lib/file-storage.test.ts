@@ -3,7 +3,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { text } from 'node:stream/consumers';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { DiskStorage, StorageKeyError } from './storage';
+import { DiskStorage, StorageKeyError } from './file-storage';
 
 let root: string;
 let storage: DiskStorage;

@@ -6,14 +6,12 @@ import { Visit } from './visits.model';
 
 export const WRITABLE_STATUSES = ['draft', 'in_progress'] as const;
 
-// One reference format for the server, the record and the screens.
-export { visitReference };
-
 /**
- * A technician reaches only visits assigned to them; managers and admins reach every visit (DESIGN.md §2).
- * Another technician's visit answers 404, so its existence is not revealed.
+ * The visit, if this person may reach it: a technician reaches only visits assigned to them; managers
+ * and admins reach every visit. Another technician's visit answers 404, so its existence is not
+ * revealed. Given a transaction, the row is locked (SELECT … FOR UPDATE) until it ends.
  */
-export async function loadVisitForRead(user: SessionUser, visitId: number, transaction?: Transaction): Promise<Visit> {
+export async function loadAccessibleVisit(user: SessionUser, visitId: number, transaction?: Transaction): Promise<Visit> {
   // Inside a transaction the row is locked, so the checks below still hold when the work is written.
   const visit = await Visit.findByPk(visitId, transaction ? { transaction, lock: transaction.LOCK.UPDATE } : {});
   if (!visit || (user.role === 'technician' && visit.technicianId !== user.id)) {
@@ -22,9 +20,9 @@ export async function loadVisitForRead(user: SessionUser, visitId: number, trans
   return visit;
 }
 
-/** As loadVisitForRead, and the visit must still be open for work (409 otherwise). */
-export async function loadVisitForWrite(user: SessionUser, visitId: number, transaction?: Transaction): Promise<Visit> {
-  const visit = await loadVisitForRead(user, visitId, transaction);
+/** As loadAccessibleVisit (and locked the same way), and the visit must still be open for work (409 otherwise). */
+export async function loadWritableVisit(user: SessionUser, visitId: number, transaction?: Transaction): Promise<Visit> {
+  const visit = await loadAccessibleVisit(user, visitId, transaction);
   if (!(WRITABLE_STATUSES as readonly string[]).includes(visit.status)) {
     const why =
       visit.status === 'returned'
