@@ -80,7 +80,8 @@ describe('working the steps', () => {
     const v = await startVisit();
     const res = await answer(tech, v.id, 'monitor-jumper', { outcome: 'yes' });
     expect(res.status).toBe(409);
-    expect(res.body.error.message).toMatch(/Answer the current step first/);
+    expect(res.body.error.code).toBe('step_not_reached');
+    expect(res.body.error.message).toMatch(/"Bring the press to rest" comes first/);
   });
 
   it('decides the firmware outcome itself from the rules, whatever the client says', async () => {
