@@ -6,7 +6,7 @@ import { anonymous, signedInAgent, useApiApp } from '../api-app';
 import { makePress, makeUser } from '../factories';
 import { listRoutes } from '../route-list';
 import { useTestDatabase } from '../setup/database';
-import { makeTestBandSet, signaturePng, workToResistanceStep } from '../visit-steps';
+import { makeTestBandSet, returnedToProduction, signaturePng, workToResistanceStep } from '../visit-steps';
 
 // The route × role table. The list of routes comes from the app itself, so a route added without a
 // row here fails this file. Each row says what each caller gets, in this order:
@@ -197,7 +197,7 @@ beforeAll(async () => {
       actionsTaken: 'Replaced the crank-angle sensor.',
       labourMinutes: 60,
       travelMinutes: 30,
-      returnToService: { faultCleared: true, tdcAgrees: true, stoppingTimeChecked: true, presenceSensingDistanceOk: 'yes' },
+      ...returnedToProduction({ presenceSensingDistanceOk: 'yes' }),
       contactName: 'Pat Plant',
       contactEmail: 'pat@plant.example',
       signaturePng: await signaturePng(),

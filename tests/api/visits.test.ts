@@ -4,7 +4,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { signedInAgent, useApiApp } from '../api-app';
 import { makePress, makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
-import { answer, makeTestBandSet, reading, signaturePng, windingReadings, workToResistanceStep } from '../visit-steps';
+import { answer, makeTestBandSet, reading, returnedToProduction, signaturePng, windingReadings, workToResistanceStep } from '../visit-steps';
 
 const db = useTestDatabase();
 const { app } = useApiApp(db);
@@ -39,7 +39,7 @@ async function closeOutBody() {
     parts: [{ id: randomUUID(), partNumber: 'TEST-PART-1', description: 'Sensor (test part)', quantity: 1, serialRemoved: 'OLD-1', serialFitted: 'NEW-1' }],
     labourMinutes: 95,
     travelMinutes: 40,
-    returnToService: { faultCleared: true, tdcAgrees: true, stoppingTimeChecked: true, stoppingTimeMs: 180, presenceSensingDistanceOk: 'yes' },
+    ...returnedToProduction({ stoppingTimeMs: 180, presenceSensingDistanceOk: 'yes' }),
     contactName: 'Pat Plant',
     contactEmail: 'pat@plant.example',
     signaturePng: await signaturePng(),

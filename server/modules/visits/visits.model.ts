@@ -1,6 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
 import type { CauseCategory } from '../../../shared/schemas/reading';
-import type { ReturnToService, VisitStatus } from '../../../shared/schemas/visit';
+import type { AsLeftState, LockedOut, ReturnToService, VisitStatus } from '../../../shared/schemas/visit';
 import type { Press } from '../presses/presses.model';
 import type { User } from '../users/users.model';
 
@@ -22,7 +22,12 @@ export class Visit extends Model<InferAttributes<Visit>, InferCreationAttributes
   declare recommendations: CreationOptional<string | null>;
   declare labourMinutes: CreationOptional<number | null>;
   declare travelMinutes: CreationOptional<number | null>;
+  declare asLeftState: CreationOptional<AsLeftState | null>;
   declare returnToService: CreationOptional<ReturnToService | null>;
+  declare lockedOut: CreationOptional<LockedOut | null>;
+  declare cancelledAt: CreationOptional<Date | null>;
+  declare cancelReason: CreationOptional<string | null>;
+  declare cancelledBy: CreationOptional<number | null>;
   declare contactName: CreationOptional<string | null>;
   declare contactEmail: CreationOptional<string | null>;
   declare signedAt: CreationOptional<Date | null>;
@@ -55,7 +60,12 @@ export function initVisit(sequelize: Sequelize): void {
       recommendations: text(),
       labourMinutes: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
       travelMinutes: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
+      asLeftState: text(),
       returnToService: { type: DataTypes.JSONB, allowNull: true, defaultValue: null },
+      lockedOut: { type: DataTypes.JSONB, allowNull: true, defaultValue: null },
+      cancelledAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
+      cancelReason: text(),
+      cancelledBy: { type: DataTypes.INTEGER, allowNull: true, defaultValue: null },
       contactName: text(),
       contactEmail: text(),
       signedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
