@@ -168,8 +168,9 @@ export async function cancelVisit(user: SessionUser, visitId: number, input: Can
     if (visit.status !== 'draft' && visit.status !== 'in_progress') {
       throw new AppError(409, 'visit_not_open', `Visit ${visitReference(visitId)} is ${VISIT_STATUS_LABELS[visit.status as VisitStatus].toLowerCase()}; only an open visit (not yet closed) can be cancelled.`);
     }
+    const fromStatus = visit.status;
     await visit.update({ status: 'cancelled', cancelledAt: new Date(), cancelReason: input.reason, cancelledBy: user.id }, { transaction });
-    await audit({ visitId, actorId: user.id, action: 'visit_cancelled', detail: { reason: input.reason, fromStatus: visit.status } }, transaction);
+    await audit({ visitId, actorId: user.id, action: 'visit_cancelled', detail: { reason: input.reason, fromStatus } }, transaction);
   });
   return getVisitDetail(user, visitId);
 }
