@@ -30,8 +30,9 @@ export interface DeviceDistance {
   formula: string;
 }
 
-// The small allowance keeps 12.600000000000001 at 12.6 instead of lifting it to 12.7.
-export const roundUpTenth = (value: number) => Math.ceil(value * 10 - 1e-9) / 10;
+// The small allowance keeps 12.600000000000001 at 12.6 instead of lifting it to 12.7; adding 0
+// turns the -0 that ceil gives for 0 into 0.
+export const roundUpTenth = (value: number) => (Math.ceil(value * 10 - 1e-9) + 0) / 10;
 
 type DistanceInputs = Pick<ReturnToService, 'presenceSensingDistanceOk' | 'twoHandDevice' | 'stoppingTimeMs' | 'strokesPerMinute' | 'engagingPoints'>;
 
