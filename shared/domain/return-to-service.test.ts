@@ -13,9 +13,9 @@ const madeUpFinding = (words: string): FindingStep => ({
   instructions: words,
   conclusion: 'Made up for this test.',
   recommendedAction: 'Nothing.',
-  causeCategory: 'sensor',
+  cause: 'sensor',
   escalate: false,
-}) as FindingStep;
+});
 
 // After a sensor is replaced or re-aligned, every setting taken from the crank angle (top stop,
 // light-curtain muting on the upstroke only, cam outputs) must be verified before production:

@@ -26,7 +26,8 @@ function distancesFor(values: Typed | undefined): DeviceDistance[] {
   const points = typedNumber(values.engagingPoints, 24);
   return returnToServiceDistances({
     stoppingTimeMs: stoppingTimeMs(values.stoppingTimeMs) ?? undefined,
-    presenceSensingDistanceOk: values.presenceSensingDistanceOk === 'yes' ? 'yes' : 'not_fitted',
+    // Shown as soon as a stopping time is typed, unless the technician says no such device is fitted.
+    presenceSensingDistanceOk: values.presenceSensingDistanceOk === 'not_fitted' ? 'not_fitted' : 'yes',
     twoHandDevice: (['control', 'trip'].includes(values.twoHandDevice as string) ? values.twoHandDevice : 'not_fitted') as TwoHandDevice,
     strokesPerMinute: typedNumber(values.strokesPerMinute, 2000) ?? undefined,
     engagingPoints: points !== null && Number.isInteger(points) ? points : undefined,
