@@ -15,7 +15,7 @@ describe('the visit record builder', () => {
     expect(record.header).toMatchObject({
       reference: 'V-000042',
       statusLabel: 'Closed — awaiting review',
-      pressLine: 'HS-P07, SR-250 (invented model), 250 t, sensor generation demo-gen-1',
+      pressLine: 'HS-P07, SR-250 (invented model), 250 US tons, sensor generation demo-gen-1',
       siteLine: 'Main plant (invented), 400 Foundry Road (invented)',
       bandSetLine: 'Demo generation 1 (invented), version 1 (invented demo values)',
       technician: { name: 'Dana Okafor (invented)' },

@@ -2,6 +2,7 @@ import { formatSi } from '../domain/format-quantity';
 import type { EntryJudgement, ResistanceFigures, VoltageFigures } from '../domain/judge-entry';
 import { traverseProcedure } from '../domain/traverse-procedure';
 import { RETURN_TO_SERVICE } from '../data/safety-messages';
+import { formatCapacity, type CapacityUnit } from '../format/capacity';
 import { visitReference } from '../format/visit-reference';
 import { circuitLabel, POSITION_LABELS, QUANTITY_LABELS, verdictLabel, VISIT_STATUS_LABELS } from '../format/labels';
 import type { BandSetValues } from '../schemas/band-set';
@@ -41,7 +42,7 @@ export interface VisitRecordSource {
   };
   customer: { name: string };
   site: { name: string; address: string | null; city: string | null };
-  press: { assetTag: string; model: string; tonnage: number; controlModel: string | null; sensorGeneration: string | null };
+  press: { assetTag: string; model: string; tonnage: number; capacityUnit: CapacityUnit; controlModel: string | null; sensorGeneration: string | null };
   technicianName: string;
   procedure: { title: string; version: number; definition: ProcedureDefinition };
   bandSet: { label: string; generation: string; version: number; bands: BandSetValues } | null;
@@ -73,7 +74,7 @@ export interface VisitRecordSource {
 export const reportTitle = (reference: string, corrected: boolean) => `${corrected ? 'Corrected service report' : 'Service report'} ${reference}`;
 
 function pressLine(p: VisitRecordSource['press']): string {
-  return [p.assetTag, p.model, `${p.tonnage} t`, p.controlModel, p.sensorGeneration ? `sensor generation ${p.sensorGeneration}` : null].filter(Boolean).join(', ');
+  return [p.assetTag, p.model, formatCapacity(p.tonnage, p.capacityUnit), p.controlModel, p.sensorGeneration ? `sensor generation ${p.sensorGeneration}` : null].filter(Boolean).join(', ');
 }
 
 function readingOf(src: VisitRecordSource, stepTitles: Map<string, string>, r: VisitRecordSource['readings'][number]): RecordReading {

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { CAPACITY_UNITS, type CapacityUnit } from '../format/capacity';
 import { pageQuerySchema } from './common';
 import { nameText, text } from './text';
 
@@ -17,6 +18,8 @@ export const customerInputSchema = z.object({
     .or(z.literal('').transform(() => undefined)),
   contactPhone: optionalText(40, nameText),
   notes: optionalText(2000),
+  /** The unit this customer's press capacities are stated in; changing it converts every press of the customer. */
+  capacityUnit: z.enum(CAPACITY_UNITS, 'Choose US tons or tonnes').optional(),
 });
 export type CustomerInput = z.infer<typeof customerInputSchema>;
 export const customerUpdateSchema = customerInputSchema.partial();
@@ -31,6 +34,7 @@ export interface Customer {
   contactEmail: string | null;
   contactPhone: string | null;
   notes: string | null;
+  capacityUnit: CapacityUnit;
   createdAt: string;
   updatedAt: string;
 }

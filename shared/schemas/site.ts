@@ -1,3 +1,4 @@
+import type { CapacityUnit } from '../format/capacity';
 import { z } from 'zod';
 import { pageQuerySchema } from './common';
 import { idNumber } from './numbers';
@@ -22,6 +23,8 @@ export interface Site {
   id: number;
   customerId: number;
   customerName?: string;
+  /** The customer's unit for press capacity. */
+  capacityUnit: CapacityUnit;
   name: string;
   address: string | null;
   city: string | null;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { CAPACITY_UNITS } from '../format/capacity';
 import { STEP_KINDS } from './procedure';
 import { causeCategorySchema, circuitSchema, positionSchema, quantitySchema, verdictSchema } from './reading';
 import { LOCKED_OUT_WAITS_FOR, visitStatusSchema } from './visit';
@@ -22,8 +23,8 @@ export const recordHeaderSchema = z.object({
   site: z.object({ name: z.string(), address: z.string().nullable(), city: z.string().nullable() }),
   /** "Harlow …, 400 Foundry Road, …" */
   siteLine: z.string(),
-  press: z.object({ assetTag: z.string(), model: z.string(), tonnage: z.number(), controlModel: z.string().nullable(), sensorGeneration: z.string().nullable() }),
-  /** "HS-P07, SR-250 …, 250 t, sensor generation demo-gen-1" */
+  press: z.object({ assetTag: z.string(), model: z.string(), tonnage: z.number(), capacityUnit: z.enum(CAPACITY_UNITS), controlModel: z.string().nullable(), sensorGeneration: z.string().nullable() }),
+  /** "HS-P07, SR-250 …, 250 US tons, sensor generation demo-gen-1" (capacity in the customer's unit) */
   pressLine: z.string(),
   technician: z.object({ name: z.string() }),
   startedAt: iso.nullable(),

@@ -14,6 +14,7 @@ export function toCustomerDto(c: Customer): CustomerDto {
     contactEmail: c.contactEmail,
     contactPhone: c.contactPhone,
     notes: c.notes,
+    capacityUnit: c.capacityUnit,
     createdAt: c.createdAt.toISOString(),
     updatedAt: c.updatedAt.toISOString(),
   };

@@ -62,7 +62,7 @@ export async function readVisitRecordSource(visitId: number, options: RecordOpti
     },
     customer: { name: site.customer!.name },
     site: { name: site.name, address: site.address, city: site.city },
-    press: { assetTag: press.assetTag, model: press.model, tonnage: press.tonnage, controlModel: press.controlModel, sensorGeneration: press.sensorGeneration },
+    press: { assetTag: press.assetTag, model: press.model, tonnage: press.tonnage, capacityUnit: site.customer!.capacityUnit, controlModel: press.controlModel, sensorGeneration: press.sensorGeneration },
     technicianName: visit.technician?.name ?? '',
     procedure: { title: ctx.procedure.title, version: ctx.procedure.version, definition: ctx.definition },
     bandSet: ctx.bandSet ? { label: ctx.bandSet.label, generation: ctx.bandSet.generation, version: ctx.bandSet.version, bands: ctx.bandSet.bands } : null,

@@ -88,7 +88,7 @@ export function recordSource(overrides: Partial<VisitRecordSource> = {}): VisitR
     },
     customer: { name: 'Harlow Stamping Works (invented)' },
     site: { name: 'Main plant (invented)', address: '400 Foundry Road (invented)', city: null },
-    press: { assetTag: 'HS-P07', model: 'SR-250 (invented model)', tonnage: 250, controlModel: null, sensorGeneration: 'demo-gen-1' },
+    press: { assetTag: 'HS-P07', model: 'SR-250 (invented model)', tonnage: 250, capacityUnit: 'us_ton', controlModel: null, sensorGeneration: 'demo-gen-1' },
     technicianName: 'Dana Okafor (invented)',
     procedure: { title: CRANK_ANGLE_PROCEDURE.title, version: 1, definition: CRANK_ANGLE_PROCEDURE.definition },
     bandSet: { label: BANDS.label, generation: 'demo-gen-1', version: 1, bands: BANDS },

@@ -1,6 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQuery } from '@tanstack/react-query';
-import { useForm } from 'react-hook-form';
+import { useForm, useWatch } from 'react-hook-form';
+import { CAPACITY_UNIT_NAMES } from '@shared/format/capacity';
 import type { z } from 'zod';
 import { pressInputSchema, type Press, type PressInput } from '@shared/schemas/press';
 import { Field } from '@/components/ui/field';
@@ -16,7 +17,7 @@ const NAMES = ['siteId', 'assetTag', 'model', 'tonnage', 'controlModel', 'sensor
 export function PressForm({ press, onDone }: { press: Press | null; onDone: () => void }) {
   const save = useSaveRecord('presses');
   const sites = useQuery(directoryListOptions('sites', { q: '', page: 1, pageSize: 100 }));
-  const { register, handleSubmit, setError, formState: { errors } } = useForm<Fields, unknown, PressInput>({
+  const { register, handleSubmit, setError, control, formState: { errors } } = useForm<Fields, unknown, PressInput>({
     resolver: zodResolver(pressInputSchema),
     defaultValues: {
       siteId: press?.siteId ?? '',
@@ -30,6 +31,9 @@ export function PressForm({ press, onDone }: { press: Press | null; onDone: () =
       notes: press?.notes ?? '',
     },
   });
+  // The capacity is typed in the unit of the chosen site's customer.
+  const siteId = useWatch({ control, name: 'siteId' });
+  const unit = sites.data?.items.find((s) => String(s.id) === String(siteId))?.capacityUnit ?? press?.capacityUnit;
   const onSubmit = handleSubmit(async (values) => {
     try {
       await save.mutateAsync({ id: press?.id ?? null, values });
@@ -59,7 +63,7 @@ export function PressForm({ press, onDone }: { press: Press | null; onDone: () =
       <div className="grid gap-4 md:grid-cols-3">
         {text('assetTag', 'Asset tag', 'As painted or labelled on the press')}
         {text('model', 'Press model')}
-        <Field label="Tonnage (tons)" error={errors.tonnage?.message}>
+        <Field label={unit ? `Capacity (${CAPACITY_UNIT_NAMES[unit]})` : 'Capacity'} hint={unit ? 'As rated on the nameplate' : 'Pick the site first: the unit is the customer’s'} error={errors.tonnage?.message}>
           <TextInput inputMode="numeric" {...register('tonnage')} />
         </Field>
         {text('controlModel', 'Control model')}
