@@ -32,12 +32,16 @@ describe('returnToServiceNeeds', () => {
     expect(returnToServiceNeeds(step('lockout'))).toEqual({ crankAngleSettings: false });
     expect(returnToServiceNeeds(null)).toEqual({ crankAngleSettings: false });
     expect(returnToServiceNeeds(undefined)).toEqual({ crankAngleSettings: false });
+    // Only a finding closes a visit: a step that is not one asks nothing, whatever its words.
+    const inspect = { ...madeUpFinding('Re-align the sensor at top dead centre.'), kind: 'inspect' } as unknown as Step;
+    expect(returnToServiceNeeds(inspect)).toEqual({ crankAngleSettings: false });
   });
 
   it('reads the words of any finding: re-align, re-time, or moving to top dead centre', () => {
     expect(returnToServiceNeeds(madeUpFinding('Re-align the sensor to the crank.')).crankAngleSettings).toBe(true);
     expect(returnToServiceNeeds(madeUpFinding('Realign the coupling.')).crankAngleSettings).toBe(true);
     expect(returnToServiceNeeds(madeUpFinding('Re-time the sensor.')).crankAngleSettings).toBe(true);
+    expect(returnToServiceNeeds(madeUpFinding('Retime the sensor.')).crankAngleSettings).toBe(true);
     expect(returnToServiceNeeds(madeUpFinding('Set the crank at top dead centre.')).crankAngleSettings).toBe(true);
     expect(returnToServiceNeeds(madeUpFinding('Tighten the terminal screw.')).crankAngleSettings).toBe(false);
     // "timer" is not "re-time"; "aligned" alone is not a re-alignment.
@@ -91,6 +95,10 @@ describe('returnToServiceDistances', () => {
     expect(returnToServiceDistances({ stoppingTimeMs: 180, presenceSensingDistanceOk: 'not_fitted', twoHandDevice: 'not_fitted' })).toEqual([]);
     expect(returnToServiceDistances({ stoppingTimeMs: 180, presenceSensingDistanceOk: 'not_fitted', twoHandDevice: 'trip', strokesPerMinute: 40 })).toEqual([]);
     expect(returnToServiceDistances({ stoppingTimeMs: 180, presenceSensingDistanceOk: 'not_fitted', twoHandDevice: 'trip', engagingPoints: 4 })).toEqual([]);
+    // Trip figures left over from an earlier choice do not make a trip distance for a control or no station.
+    const leftover = { strokesPerMinute: 40, engagingPoints: 4, presenceSensingDistanceOk: 'not_fitted' } as const;
+    expect(returnToServiceDistances({ ...leftover, twoHandDevice: 'not_fitted' })).toEqual([]);
+    expect(returnToServiceDistances({ ...leftover, twoHandDevice: 'control' })).toEqual([]);
     expect(returnToServiceDistances({})).toEqual([]);
   });
 

@@ -42,7 +42,8 @@ type DistanceInputs = Pick<ReturnToService, 'presenceSensingDistanceOk' | 'twoHa
  * the clutch's engaging points (two-hand trip). A device whose figures are missing is left out.
  */
 export function returnToServiceDistances(rts: Partial<DistanceInputs>): DeviceDistance[] {
-  const seconds = rts.stoppingTimeMs !== undefined && rts.stoppingTimeMs > 0 ? rts.stoppingTimeMs / 1000 : null;
+  const ms = rts.stoppingTimeMs ?? 0;
+  const seconds = ms > 0 ? ms / 1000 : null;
   const out: DeviceDistance[] = [];
   const add = (device: SafeguardDevice, d: { distance: number; standard: string; formula: string }) =>
     out.push({ device, inches: roundUpTenth(d.distance), millimetres: roundUpTenth(inchesToMillimetres(d.distance)), standard: d.standard, formula: d.formula });

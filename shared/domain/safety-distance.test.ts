@@ -14,6 +14,7 @@ describe('oshaPresenceSensingDistance — OSHA 29 CFR 1910.217(c)(3)(iii)(e)', (
   it('Ts = 0.5 s gives 31.5 in (Washington WAC 296-806-45516 example)', () => {
     const result = oshaPresenceSensingDistance(0.5);
     expect(result.distance).toBeCloseTo(31.5, 10);
+    expect(result.unit).toBe('in');
     expect(result.standard).toBe('OSHA 29 CFR 1910.217(c)(3)(iii)(e)');
   });
 
