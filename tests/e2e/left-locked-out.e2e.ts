@@ -56,7 +56,7 @@ describe('a press left locked out', () => {
     await tech.getByRole('status').filter({ hasText: /^✓?\s*Signed$/ }).waitFor();
     await tech.getByRole('heading', { name: 'How the press is left' }).scrollIntoViewIfNeeded();
     await checkA11y(tech, 'close-out: left locked out');
-    await screenshot(tech, '20-close-out-locked-out-tablet');
+    await screenshot(tech, '40-close-out-locked-out-tablet');
     await tech.getByRole('button', { name: 'Close the visit' }).click();
     await tech.getByText('This visit is closed').waitFor();
 
@@ -72,6 +72,6 @@ describe('a press left locked out', () => {
     expect(firstLine.startsWith(HEADLINE)).toBe(true);
     expect(await horizontalOverflow(customer), 'the report page scrolls sideways on a phone').toBeLessThanOrEqual(0);
     await checkA11y(customer, 'customer report, press left locked out (phone)');
-    await screenshot(customer, '21-report-locked-out-phone');
+    await screenshot(customer, '41-report-locked-out-phone');
   });
 });
