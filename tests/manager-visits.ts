@@ -14,6 +14,8 @@ export interface RawVisit {
   labourMinutes?: number | null;
   /** Verdicts of current readings, stored while the visit was still open (the database refuses them later). */
   verdicts?: Verdict[];
+  /** A closed visit that left the press locked out (otherwise a closed visit returned it to production). */
+  lockedOut?: boolean;
 }
 
 /**
@@ -23,16 +25,24 @@ export interface RawVisit {
  */
 export async function insertVisit(sequelize: Sequelize, v: RawVisit): Promise<number> {
   const finalStatus = v.status;
-  const firstStatus = v.verdicts?.length && finalStatus !== 'draft' ? 'in_progress' : finalStatus;
+  // A cancelled visit was open first: it moves there by the status machine, with who, when and why.
+  const firstStatus = finalStatus === 'cancelled' ? 'in_progress' : v.verdicts?.length && finalStatus !== 'draft' ? 'in_progress' : finalStatus;
+  const closedOnce = ['closed', 'approved', 'returned'].includes(finalStatus);
+  const asLeft = closedOnce ? (v.lockedOut ? 'locked_out' : 'returned_to_production') : null;
+  const lockedOut = v.lockedOut ? JSON.stringify({ reason: 'Made up for tests', waitsFor: 'board' }) : null;
   const [row] = await sequelize.query<{ id: number }>(
-    `INSERT INTO visits (press_id, technician_id, status, fault_displayed, started_at, closed_at, cause_category, actions_taken, labour_minutes)
-     VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9) RETURNING id`,
+    `INSERT INTO visits (press_id, technician_id, status, fault_displayed, started_at, closed_at, cause_category, actions_taken, labour_minutes, as_left_state, locked_out)
+     VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9, $10, $11) RETURNING id`,
     {
-      bind: [v.pressId, v.technicianId, firstStatus, v.fault ?? 'Test fault', v.startedAt, firstStatus === 'in_progress' ? null : (v.closedAt ?? null), v.cause ?? null, v.actions ?? null, v.labourMinutes ?? null],
+      bind: [v.pressId, v.technicianId, firstStatus, v.fault ?? 'Test fault', v.startedAt, firstStatus === 'in_progress' ? null : (v.closedAt ?? null), v.cause ?? null, v.actions ?? null, v.labourMinutes ?? null, asLeft, lockedOut],
       type: QueryTypes.SELECT,
     },
   );
   const id = row!.id;
+  if (finalStatus === 'cancelled') {
+    await sequelize.query(`UPDATE visits SET status = 'cancelled', cancelled_at = now(), cancel_reason = 'Made up for tests', cancelled_by = $1 WHERE id = $2`, { bind: [v.technicianId, id] });
+    return id;
+  }
   if (firstStatus !== finalStatus) {
     for (const [i, verdict] of (v.verdicts ?? []).entries()) {
       const circuit = (['rotor', 'stator_1', 'stator_2'] as const)[i % 3];

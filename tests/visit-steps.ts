@@ -68,3 +68,26 @@ export async function windingReadings(agent: supertest.Agent, visitId: number, s
     if (res.status !== 200) throw new Error(`${circuit}: ${res.status} ${JSON.stringify(res.body)}`);
   }
 }
+
+/**
+ * A close-out's as-left part for a press returned to production with every check confirmed
+ * (the crank-angle settings check too, which sensor findings require); overrides change single checks.
+ */
+export function returnedToProduction(overrides: Record<string, unknown> = {}): { asLeft: 'returned_to_production'; returnToService: Record<string, unknown> } {
+  return {
+    asLeft: 'returned_to_production' as const,
+    returnToService: {
+      faultCleared: true,
+      tdcAgrees: true,
+      crankAngleSettingsVerified: true,
+      guardsRefitted: true,
+      toolsRemoved: true,
+      everyoneClear: true,
+      singleStroke: true,
+      stoppingTimeChecked: true,
+      presenceSensingDistanceOk: 'not_fitted',
+      twoHandDevice: 'not_fitted',
+      ...overrides,
+    },
+  };
+}

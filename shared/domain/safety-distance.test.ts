@@ -6,6 +6,7 @@ import {
   inchesToMillimetres,
   iso13855Distance,
   oshaPresenceSensingDistance,
+  oshaTwoHandControlDistance,
   oshaTwoHandTripDistance,
 } from './safety-distance';
 
@@ -13,6 +14,7 @@ describe('oshaPresenceSensingDistance — OSHA 29 CFR 1910.217(c)(3)(iii)(e)', (
   it('Ts = 0.5 s gives 31.5 in (Washington WAC 296-806-45516 example)', () => {
     const result = oshaPresenceSensingDistance(0.5);
     expect(result.distance).toBeCloseTo(31.5, 10);
+    expect(result.unit).toBe('in');
     expect(result.standard).toBe('OSHA 29 CFR 1910.217(c)(3)(iii)(e)');
   });
 
@@ -32,6 +34,30 @@ describe('oshaTwoHandTripDistance — OSHA 29 CFR 1910.217(c)(3)(viii)(c)', () =
     expect(result.maximumTime).toBeCloseTo(1.5, 12);
     expect(result.distance).toBeCloseTo(94.5, 10);
     expect(result.standard).toContain('1910.217(c)(3)(viii)(c)');
+  });
+});
+
+// OSHA 29 CFR 1910.217(c)(3)(vii)(c), two-hand control: Ds = 63 in/s × Ts, Ts measured at about 90°
+// of crank rotation. The formula is quoted from memory of the regulation's text; it has the same form
+// as (c)(3)(iii)(e) in REFERENCES. The figures below are worked by hand.
+describe('oshaTwoHandControlDistance — OSHA 29 CFR 1910.217(c)(3)(vii)(c)', () => {
+  it('Ts = 0.18 s: Ds = 63 × 0.18 = 11.34 in (computed)', () => {
+    const result = oshaTwoHandControlDistance(0.18);
+    expect(result.distance).toBeCloseTo(11.34, 10);
+    expect(result.unit).toBe('in');
+    expect(result.standard).toBe('OSHA 29 CFR 1910.217(c)(3)(vii)(c)');
+    expect(result.formula).toBe('Ds = 63 in/s × 0.18 s');
+  });
+
+  it('Ts = 0.5 s: Ds = 31.5 in, the same hand speed as the presence-sensing rule (computed)', () => {
+    expect(oshaTwoHandControlDistance(0.5).distance).toBeCloseTo(31.5, 10);
+  });
+
+  it('accepts 0 s and refuses negative, NaN and infinite stopping times, naming the time', () => {
+    expect(oshaTwoHandControlDistance(0).distance).toBe(0);
+    for (const t of [-0.001, Number.NaN, Number.POSITIVE_INFINITY]) {
+      expect(() => oshaTwoHandControlDistance(t)).toThrow(/Stopping time must be a time of 0 s or more/);
+    }
   });
 });
 

@@ -25,6 +25,17 @@ export function oshaPresenceSensingDistance(stoppingTime: Seconds): SafetyDistan
   };
 }
 
+/** OSHA 29 CFR 1910.217(c)(3)(vii)(c): two-hand control, Ds = 63 in/s × Ts, Ts measured at about 90° of crank rotation. */
+export function oshaTwoHandControlDistance(stoppingTime: Seconds): SafetyDistance<'in'> {
+  requireTime('Stopping time', stoppingTime);
+  return {
+    distance: HAND_SPEED * stoppingTime,
+    unit: 'in',
+    standard: 'OSHA 29 CFR 1910.217(c)(3)(vii)(c)',
+    formula: `Ds = 63 in/s × ${stoppingTime} s`,
+  };
+}
+
 /** OSHA 29 CFR 1910.217(c)(3)(viii)(c): two-hand trip, Tm = (1/2 + 1/N) × time of one revolution. */
 export function oshaTwoHandTripDistance(strokesPerMinute: number, engagingPoints: number): SafetyDistance<'in'> & { maximumTime: Seconds } {
   if (!(strokesPerMinute > 0)) throw new RangeError('Strokes per minute must be above 0.');

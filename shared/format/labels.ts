@@ -21,6 +21,7 @@ export const VISIT_STATUS_LABELS: Record<VisitStatus, string> = {
   closed: 'Closed — awaiting review',
   approved: 'Approved',
   returned: 'Returned for correction',
+  cancelled: 'Cancelled',
 };
 
 export const EMAIL_STATUS_LABELS: Record<string, string> = { queued: 'Queued', sending: 'Sending', sent: 'Sent', failed: 'Failed' };

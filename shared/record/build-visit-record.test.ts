@@ -15,7 +15,7 @@ describe('the visit record builder', () => {
     expect(record.header).toMatchObject({
       reference: 'V-000042',
       statusLabel: 'Closed — awaiting review',
-      pressLine: 'HS-P07, SR-250 (invented model), 250 t, sensor generation demo-gen-1',
+      pressLine: 'HS-P07, SR-250 (invented model), 250 US tons, sensor generation demo-gen-1',
       siteLine: 'Main plant (invented), 400 Foundry Road (invented)',
       bandSetLine: 'Demo generation 1 (invented), version 1 (invented demo values)',
       technician: { name: 'Dana Okafor (invented)' },
@@ -57,21 +57,67 @@ describe('the visit record builder', () => {
     expect(readings.items[2]).toMatchObject({ verdict: 'in_band', judgedValue: '51.94 Ω', temperature: 'Winding at 35 °C; corrected to 20 °C: 51.94 Ω' });
   });
 
-  it('records the press as returned to production with each check in words, or nothing before the close-out', () => {
+  it('records the press as returned to production with each check in words and the two-hand distance, or nothing before the close-out', () => {
     const { asLeft } = buildVisitRecord(source());
     expect(asLeft).toEqual({
       state: 'returned_to_production',
-      label: 'Returned to production after the return-to-service checks',
+      headline: 'Press returned to production',
       checks: [
         { key: 'faultCleared', text: RETURN_TO_SERVICE_CHECKS.faultCleared },
         { key: 'tdcAgrees', text: RETURN_TO_SERVICE_CHECKS.tdcAgrees },
+        { key: 'crankAngleSettings', text: RETURN_TO_SERVICE_CHECKS.crankAngleSettings },
+        { key: 'guardsRefitted', text: RETURN_TO_SERVICE_CHECKS.guardsRefitted },
+        { key: 'toolsRemoved', text: RETURN_TO_SERVICE_CHECKS.toolsRemoved },
+        { key: 'everyoneClear', text: RETURN_TO_SERVICE_CHECKS.everyoneClear },
+        { key: 'singleStroke', text: RETURN_TO_SERVICE_CHECKS.singleStroke },
         { key: 'stoppingTimeChecked', text: RETURN_TO_SERVICE_CHECKS.stoppingTimeChecked },
         { key: 'presenceSensing', text: 'No presence-sensing device is fitted to this press.' },
+        { key: 'twoHand', text: 'Every two-hand control station sits at or beyond its safety distance.' },
       ],
       stoppingTimeMs: 180,
+      // OSHA 29 CFR 1910.217(c)(3)(vii)(c): Ds = 63 in/s × 0.18 s = 11.34 in → 11.4 in rounded up;
+      // 11.34 in × 25.4 mm/in = 288.036 mm → 288.1 mm (worked by hand).
+      distances: ['Two-hand control: minimum safety distance 11.4 in (288.1 mm), OSHA 29 CFR 1910.217(c)(3)(vii)(c): Ds = 63 in/s × 0.18 s; rounded up.'],
     });
     const open = source();
-    expect(buildVisitRecord({ ...open, visit: { ...open.visit, status: 'in_progress', returnToService: null } }).asLeft).toBeNull();
+    expect(buildVisitRecord({ ...open, visit: { ...open.visit, status: 'in_progress', asLeftState: null, returnToService: null } }).asLeft).toBeNull();
+  });
+
+  it('keeps a visit closed before the fuller checks with only the checks it confirmed', () => {
+    const src = source();
+    const older = { faultCleared: true, tdcAgrees: true, stoppingTimeChecked: true, presenceSensingDistanceOk: 'yes' } as unknown as typeof src.visit.returnToService;
+    const asLeft = buildVisitRecord({ ...src, visit: { ...src.visit, returnToService: older } }).asLeft;
+    expect(asLeft?.state === 'returned_to_production' && asLeft.checks.map((c) => c.key)).toEqual(['faultCleared', 'tdcAgrees', 'stoppingTimeChecked', 'presenceSensing']);
+    // No stopping time stored: no distance can be worked out, so none is claimed.
+    expect(asLeft?.state === 'returned_to_production' && asLeft.distances).toEqual([]);
+  });
+
+  it('records a press left locked out with what it waits for as the headline, no return-to-service checks and no time to repair', () => {
+    const src = source();
+    const record = buildVisitRecord({
+      ...src,
+      visit: { ...src.visit, asLeftState: 'locked_out', returnToService: null, lockedOut: { reason: 'Excitation missing at the board (invented).', waitsFor: 'board' } },
+    });
+    expect(record.asLeft).toEqual({
+      state: 'locked_out',
+      headline: 'Press left locked out: not fit for production until the processor board is repaired or replaced',
+      reason: 'Excitation missing at the board (invented).',
+      waitsFor: 'board',
+    });
+    expect(record.times.repairMinutes).toBeNull();
+    expect(record.times.labourMinutes).toBe(95);
+    const other = buildVisitRecord({
+      ...src,
+      visit: { ...src.visit, asLeftState: 'locked_out', returnToService: null, lockedOut: { reason: 'No spare on site.', waitsFor: 'other', waitsForDetail: 'the plant fits its spare cable. ' } },
+    });
+    expect(other.asLeft?.headline).toBe('Press left locked out: not fit for production until the plant fits its spare cable');
+  });
+
+  it('marks a cancelled visit with who, when and why', () => {
+    const src = source();
+    const record = buildVisitRecord({ ...src, visit: { ...src.visit, status: 'cancelled', cancellation: { at: AT(30), by: 'Dana Okafor (invented)', reason: 'Started on the wrong press' } } });
+    expect(record.header.statusLabel).toBe('Cancelled');
+    expect(record.header.cancellation).toEqual({ at: AT(30), by: 'Dana Okafor (invented)', reason: 'Started on the wrong press' });
   });
 
   it('lists the safety statements of the steps taken once each, always with the return-to-service warning', () => {

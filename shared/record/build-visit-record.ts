@@ -2,14 +2,16 @@ import { formatSi } from '../domain/format-quantity';
 import type { EntryJudgement, ResistanceFigures, VoltageFigures } from '../domain/judge-entry';
 import { traverseProcedure } from '../domain/traverse-procedure';
 import { RETURN_TO_SERVICE } from '../data/safety-messages';
+import { formatCapacity, type CapacityUnit } from '../format/capacity';
 import { visitReference } from '../format/visit-reference';
 import { circuitLabel, POSITION_LABELS, QUANTITY_LABELS, verdictLabel, VISIT_STATUS_LABELS } from '../format/labels';
 import type { BandSetValues } from '../schemas/band-set';
 import type { ProcedureDefinition, SafetyMessage, Step } from '../schemas/procedure';
 import type { Cable, CauseCategory, Circuit, Position, Quantity, Verdict } from '../schemas/reading';
-import { CAUSE_LABELS, type ReturnToService, type VisitStatus } from '../schemas/visit';
+import { CAUSE_LABELS, type AsLeftState, type LockedOut, type ReturnToService, type VisitStatus } from '../schemas/visit';
+import { returnToServiceDistances } from '../domain/return-to-service';
 import type { AsLeft, RecordPathStep, RecordReading, VisitRecord } from '../schemas/visit-record';
-import { AS_LEFT_LABELS, bandLine, RECORD_WORDS, RETURN_TO_SERVICE_CHECKS } from './record-wording';
+import { AS_LEFT_HEADLINES, bandLine, distanceLine, RECORD_WORDS, RETURN_TO_SERVICE_CHECKS, WAITS_FOR_WORDS } from './record-wording';
 
 /** What the server reads for one visit, as plain values: the builder below turns it into the record. */
 export interface VisitRecordSource {
@@ -27,7 +29,10 @@ export interface VisitRecordSource {
     recommendations: string | null;
     labourMinutes: number | null;
     travelMinutes: number | null;
+    asLeftState: AsLeftState | null;
     returnToService: ReturnToService | null;
+    lockedOut: LockedOut | null;
+    cancellation: { at: string; by: string | null; reason: string } | null;
     contactName: string | null;
     contactEmail: string | null;
     controlFirmwareFound: string | null;
@@ -37,7 +42,7 @@ export interface VisitRecordSource {
   };
   customer: { name: string };
   site: { name: string; address: string | null; city: string | null };
-  press: { assetTag: string; model: string; tonnage: number; controlModel: string | null; sensorGeneration: string | null };
+  press: { assetTag: string; model: string; tonnage: number; capacityUnit: CapacityUnit; controlModel: string | null; sensorGeneration: string | null };
   technicianName: string;
   procedure: { title: string; version: number; definition: ProcedureDefinition };
   bandSet: { label: string; generation: string; version: number; bands: BandSetValues } | null;
@@ -69,7 +74,7 @@ export interface VisitRecordSource {
 export const reportTitle = (reference: string, corrected: boolean) => `${corrected ? 'Corrected service report' : 'Service report'} ${reference}`;
 
 function pressLine(p: VisitRecordSource['press']): string {
-  return [p.assetTag, p.model, `${p.tonnage} t`, p.controlModel, p.sensorGeneration ? `sensor generation ${p.sensorGeneration}` : null].filter(Boolean).join(', ');
+  return [p.assetTag, p.model, formatCapacity(p.tonnage, p.capacityUnit), p.controlModel, p.sensorGeneration ? `sensor generation ${p.sensorGeneration}` : null].filter(Boolean).join(', ');
 }
 
 function readingOf(src: VisitRecordSource, stepTitles: Map<string, string>, r: VisitRecordSource['readings'][number]): RecordReading {
@@ -109,12 +114,43 @@ function readingOf(src: VisitRecordSource, stepTitles: Map<string, string>, r: V
   };
 }
 
-function asLeftOf(rts: ReturnToService | null): AsLeft | null {
+type ReturnedChecks = Extract<AsLeft, { state: 'returned_to_production' }>['checks'];
+
+function returnedChecks(rts: ReturnToService): ReturnedChecks {
+  const checks: ReturnedChecks = [];
+  const C = RETURN_TO_SERVICE_CHECKS;
+  // Visits closed before the fuller list was asked keep only the checks they confirmed.
+  if (rts.faultCleared) checks.push({ key: 'faultCleared', text: C.faultCleared });
+  if (rts.tdcAgrees) checks.push({ key: 'tdcAgrees', text: C.tdcAgrees });
+  if (rts.crankAngleSettingsVerified) checks.push({ key: 'crankAngleSettings', text: C.crankAngleSettings });
+  if (rts.guardsRefitted) checks.push({ key: 'guardsRefitted', text: C.guardsRefitted });
+  if (rts.toolsRemoved) checks.push({ key: 'toolsRemoved', text: C.toolsRemoved });
+  if (rts.everyoneClear) checks.push({ key: 'everyoneClear', text: C.everyoneClear });
+  if (rts.singleStroke) checks.push({ key: 'singleStroke', text: C.singleStroke });
+  if (rts.stoppingTimeChecked) checks.push({ key: 'stoppingTimeChecked', text: C.stoppingTimeChecked });
+  checks.push({ key: 'presenceSensing', text: rts.presenceSensingDistanceOk === 'yes' ? C.presenceSensingOk : C.presenceSensingNotFitted });
+  if (rts.twoHandDevice) {
+    const twoHand = { control: C.twoHandControlOk, trip: C.twoHandTripOk, not_fitted: C.twoHandNotFitted }[rts.twoHandDevice];
+    checks.push({ key: 'twoHand', text: twoHand });
+  }
+  return checks;
+}
+
+function asLeftOf(visit: VisitRecordSource['visit']): AsLeft | null {
+  if (visit.asLeftState === 'locked_out' && visit.lockedOut) {
+    const { reason, waitsFor, waitsForDetail } = visit.lockedOut;
+    const until = waitsFor === 'other' ? (waitsForDetail ?? '') : WAITS_FOR_WORDS[waitsFor];
+    return { state: 'locked_out', headline: AS_LEFT_HEADLINES.lockedOut(until), reason, waitsFor };
+  }
+  const rts = visit.returnToService;
   if (!rts) return null;
-  const checks: Extract<AsLeft, { state: 'returned_to_production' }>['checks'] = [];
-  for (const key of ['faultCleared', 'tdcAgrees', 'stoppingTimeChecked'] as const) if (rts[key]) checks.push({ key, text: RETURN_TO_SERVICE_CHECKS[key] });
-  checks.push({ key: 'presenceSensing', text: rts.presenceSensingDistanceOk === 'yes' ? RETURN_TO_SERVICE_CHECKS.presenceSensingOk : RETURN_TO_SERVICE_CHECKS.presenceSensingNotFitted });
-  return { state: 'returned_to_production', label: AS_LEFT_LABELS.returned_to_production, checks, stoppingTimeMs: rts.stoppingTimeMs ?? null };
+  return {
+    state: 'returned_to_production',
+    headline: AS_LEFT_HEADLINES.returned_to_production,
+    checks: returnedChecks(rts),
+    stoppingTimeMs: rts.stoppingTimeMs ?? null,
+    distances: returnToServiceDistances(rts).map(distanceLine),
+  };
 }
 
 // NOTICE messages are about damage to equipment (ANSI Z535), not the safety of people: not listed.
@@ -155,6 +191,7 @@ export function buildVisitRecord(src: VisitRecordSource): VisitRecord {
   const current = src.readings.filter((r) => r.supersededAt === null);
   const reference = visitReference(visit.id);
   const corrected = (src.issue?.number ?? 1) > 1;
+  const asLeft = asLeftOf(visit);
 
   const pathSteps: RecordPathStep[] = traversal.path.map((p) => {
     const step = steps.get(p.stepId)!;
@@ -183,6 +220,7 @@ export function buildVisitRecord(src: VisitRecordSource): VisitRecord {
       reference,
       status: visit.status,
       statusLabel: VISIT_STATUS_LABELS[visit.status],
+      cancellation: visit.cancellation,
       customer: src.customer,
       site: src.site,
       siteLine: [src.site.name, src.site.address, src.site.city].filter(Boolean).join(', '),
@@ -214,8 +252,9 @@ export function buildVisitRecord(src: VisitRecordSource): VisitRecord {
       firmware: { controlFound: visit.controlFirmwareFound, controlLeft: visit.controlFirmwareLeft, monitorFound: visit.monitorFirmwareFound, monitorLeft: visit.monitorFirmwareLeft },
     },
     parts: src.parts,
-    times: { labourMinutes: visit.labourMinutes, travelMinutes: visit.travelMinutes, repairMinutes: minutesBetween(visit.startedAt, visit.closedAt) },
-    asLeft: asLeftOf(visit.returnToService),
+    // A press left locked out was not repaired: no time to repair (the figures leave it out too).
+    times: { labourMinutes: visit.labourMinutes, travelMinutes: visit.travelMinutes, repairMinutes: asLeft?.state === 'locked_out' ? null : minutesBetween(visit.startedAt, visit.closedAt) },
+    asLeft,
     safety: safetyOf([...traversal.path.map((p) => steps.get(p.stepId)!), ...(finding ? [finding] : [])]),
     photos: src.attachments
       .filter((a) => a.kind === 'photo')

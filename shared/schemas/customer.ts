@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { CAPACITY_UNITS, type CapacityUnit } from '../format/capacity';
 import { directorySchemas, type StoredRecord } from './common';
 import { nameText, text } from './text';
 
@@ -17,6 +18,8 @@ export const customerInputSchema = z.object({
     .or(z.literal('').transform(() => undefined)),
   contactPhone: optionalText(40, nameText),
   notes: optionalText(2000),
+  /** The unit this customer's press capacities are stated in; changing it converts every press of the customer. */
+  capacityUnit: z.enum(CAPACITY_UNITS, 'Choose US tons or tonnes').optional(),
 });
 export type CustomerInput = z.infer<typeof customerInputSchema>;
 export const { update: customerUpdateSchema, listQuery: customerListQuerySchema } = directorySchemas(customerInputSchema, {});
@@ -28,4 +31,5 @@ export interface Customer extends StoredRecord {
   contactEmail: string | null;
   contactPhone: string | null;
   notes: string | null;
+  capacityUnit: CapacityUnit;
 }

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import type { CapacityUnit } from '../format/capacity';
 import { directorySchemas, type StoredRecord } from './common';
 import { idNumber, wholeNumber } from './numbers';
 import { nameText, text } from './text';
@@ -17,9 +18,9 @@ export const pressInputSchema = z.object({
   tonnage: wholeNumber({
     min: 1,
     max: 10_000,
-    message: 'Tonnage is a whole number of tons',
-    minMessage: 'Tonnage must be at least 1',
-    maxMessage: 'Tonnage above 10,000 tons is not plausible: check the nameplate',
+    message: "Capacity is a whole number in the customer's unit (US tons or tonnes)",
+    minMessage: 'Capacity must be at least 1',
+    maxMessage: 'A capacity above 10,000 is not plausible: check the nameplate',
   }),
   controlModel: nameText({ max: 80 }).optional(),
   sensorGeneration: nameText({ max: 40 }).optional(),
@@ -39,7 +40,9 @@ export interface Press extends StoredRecord {
   customerName?: string;
   assetTag: string;
   model: string;
+  /** Rated capacity in the customer's unit (`capacityUnit`); print it with formatCapacity. */
   tonnage: number;
+  capacityUnit: CapacityUnit;
   controlModel: string | null;
   sensorGeneration: string | null;
   controlFirmware: string | null;

@@ -1,3 +1,4 @@
+import type { CapacityUnit } from '../format/capacity';
 import { z } from 'zod';
 import { directorySchemas, type StoredRecord } from './common';
 import { idNumber } from './numbers';
@@ -17,6 +18,8 @@ export type SiteListQuery = z.infer<typeof siteListQuerySchema>;
 export interface Site extends StoredRecord {
   customerId: number;
   customerName?: string;
+  /** The customer's unit for press capacity. */
+  capacityUnit: CapacityUnit;
   name: string;
   address: string | null;
   city: string | null;

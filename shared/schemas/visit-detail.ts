@@ -7,7 +7,7 @@ import type { FirmwareRule } from './firmware-rule';
 import type { Press } from './press';
 import type { ProcedureDefinition, Step } from './procedure';
 import type { Cable, CauseCategory, Circuit, Position, Quantity, Verdict } from './reading';
-import type { ReturnToService, VisitStatus } from './visit';
+import type { AsLeftState, LockedOut, ReturnToService, VisitStatus } from './visit';
 
 export interface VisitSummary {
   id: number;
@@ -105,11 +105,15 @@ export interface VisitDetail extends VisitSummary {
     recommendations: string | null;
     labourMinutes: number | null;
     travelMinutes: number | null;
+    asLeftState: AsLeftState | null;
     returnToService: ReturnToService | null;
+    lockedOut: LockedOut | null;
     contactName: string | null;
     contactEmail: string | null;
     signedAt: string | null;
     parts: PartRecord[];
   };
   reviewComment: string | null;
+  /** Set once the visit was cancelled (started by mistake); it is kept for the record. */
+  cancellation: { at: string; reason: string } | null;
 }

@@ -1,7 +1,8 @@
 import { z } from 'zod';
+import { CAPACITY_UNITS } from '../format/capacity';
 import { STEP_KINDS } from './procedure';
 import { causeCategorySchema, circuitSchema, positionSchema, quantitySchema, verdictSchema } from './reading';
-import { visitStatusSchema } from './visit';
+import { LOCKED_OUT_WAITS_FOR, visitStatusSchema } from './visit';
 
 // One visit record, built on the server from a visit and rendered as it is by the manager's record
 // page, the customer's report page, the PDF and the e-mail. Dates are ISO strings; the renderings
@@ -16,12 +17,14 @@ export const recordHeaderSchema = z.object({
   reference: z.string(),
   status: visitStatusSchema,
   statusLabel: z.string(),
+  /** Set when the visit was cancelled: "Cancelled 2 Dec 2026 by …: started on the wrong press". */
+  cancellation: z.object({ at: iso, by: z.string().nullable(), reason: z.string() }).nullable(),
   customer: z.object({ name: z.string() }),
   site: z.object({ name: z.string(), address: z.string().nullable(), city: z.string().nullable() }),
   /** "Harlow …, 400 Foundry Road, …" */
   siteLine: z.string(),
-  press: z.object({ assetTag: z.string(), model: z.string(), tonnage: z.number(), controlModel: z.string().nullable(), sensorGeneration: z.string().nullable() }),
-  /** "HS-P07, SR-250 …, 250 t, sensor generation demo-gen-1" */
+  press: z.object({ assetTag: z.string(), model: z.string(), tonnage: z.number(), capacityUnit: z.enum(CAPACITY_UNITS), controlModel: z.string().nullable(), sensorGeneration: z.string().nullable() }),
+  /** "HS-P07, SR-250 …, 250 US tons, sensor generation demo-gen-1" (capacity in the customer's unit) */
   pressLine: z.string(),
   technician: z.object({ name: z.string() }),
   startedAt: iso.nullable(),
@@ -33,17 +36,29 @@ export const recordHeaderSchema = z.object({
   bandSetLine: z.string(),
 });
 
-/**
- * How the press was left. Today a visit closes only with the press returned to production after the
- * return-to-service checks; another case (for example left locked out) joins this union with its own fields.
- */
+/** How the press was left; `headline` is the first line of every rendering of a closed visit. */
 export const asLeftSchema = z.discriminatedUnion('state', [
   z.object({
     state: z.literal('returned_to_production'),
-    label: z.string(),
+    /** "Press returned to production" */
+    headline: z.string(),
     /** The checks confirmed before production, each as a sentence. */
-    checks: z.array(z.object({ key: z.enum(['faultCleared', 'tdcAgrees', 'stoppingTimeChecked', 'presenceSensing']), text: z.string() })),
+    checks: z.array(
+      z.object({
+        key: z.enum(['faultCleared', 'tdcAgrees', 'crankAngleSettings', 'guardsRefitted', 'toolsRemoved', 'everyoneClear', 'singleStroke', 'stoppingTimeChecked', 'presenceSensing', 'twoHand']),
+        text: z.string(),
+      }),
+    ),
     stoppingTimeMs: z.number().nullable(),
+    /** The minimum safety distance of each safeguarding device, worked out from the figures given, as sentences. */
+    distances: z.array(z.string()),
+  }),
+  z.object({
+    state: z.literal('locked_out'),
+    /** "Press left locked out: not fit for production until …" */
+    headline: z.string(),
+    reason: z.string(),
+    waitsFor: z.enum(LOCKED_OUT_WAITS_FOR),
   }),
 ]);
 

@@ -3,17 +3,18 @@ import { pageNumber, pageSize } from './common';
 import { decimalNumber, idNumber, wholeNumber } from './numbers';
 import { nameText, text } from './text';
 
-export const VISIT_STATUSES = ['draft', 'in_progress', 'closed', 'approved', 'returned'] as const;
+export const VISIT_STATUSES = ['draft', 'in_progress', 'closed', 'approved', 'returned', 'cancelled'] as const;
 export const visitStatusSchema = z.enum(VISIT_STATUSES);
 export type VisitStatus = z.infer<typeof visitStatusSchema>;
 
 /** The visit status machine; the database enforces the same pairs with a trigger. */
 export const VISIT_TRANSITIONS: Record<VisitStatus, readonly VisitStatus[]> = {
-  draft: ['in_progress'],
-  in_progress: ['closed'],
+  draft: ['in_progress', 'cancelled'],
+  in_progress: ['closed', 'cancelled'],
   closed: ['approved', 'returned'],
   returned: ['in_progress'],
   approved: [],
+  cancelled: [],
 };
 
 export function canMoveVisit(from: VisitStatus, to: VisitStatus): boolean {
@@ -100,15 +101,59 @@ export const partUsedSchema = z.object({
 });
 export type PartUsedInput = z.infer<typeof partUsedSchema>;
 
-/** The post-repair checks before the press goes back to production. */
-export const returnToServiceSchema = z.object({
-  faultCleared: z.literal(true, 'Confirm the fault has cleared on the control'),
-  tdcAgrees: z.literal(true, 'Confirm the crank-angle display reads top dead centre with the slide at top'),
-  stoppingTimeChecked: z.literal(true, 'Confirm the stopping-time / brake-monitor check passed'),
-  stoppingTimeMs: decimalNumber({ min: 0.001, max: 5000, message: 'Enter the stopping time in milliseconds, e.g. 180, or leave it empty', minMessage: 'The stopping time is above 0 ms' }).optional(),
-  presenceSensingDistanceOk: z.enum(['yes', 'not_fitted'], 'Say whether the presence-sensing device still sits at a safe distance'),
-});
+const tick = (message: string) => z.literal(true, message);
+
+/** Two-hand stations on the press: each kind has its own safety-distance rule (OSHA 1910.217(c)(3)(vii)(c), (viii)(c)). */
+export const TWO_HAND_DEVICES = ['control', 'trip', 'not_fitted'] as const;
+export type TwoHandDevice = (typeof TWO_HAND_DEVICES)[number];
+
+/**
+ * The post-repair checks before the press goes back to production. The crank-angle settings check is asked only after a sensor replacement or re-alignment: the server
+ * requires it from the finding (`returnToServiceNeeds`), the form from the same function.
+ */
+export const returnToServiceSchema = z
+  .object({
+    faultCleared: tick('Confirm the fault has cleared on the control'),
+    tdcAgrees: tick('Confirm the crank-angle display reads top dead centre with the slide at top'),
+    crankAngleSettingsVerified: tick('Confirm every crank-angle setting was verified after the sensor work').optional(),
+    guardsRefitted: tick('Confirm every guard, cover and enclosure door is back in place with its interlock working'),
+    toolsRemoved: tick('Confirm every tool and die safety block is out of the press'),
+    everyoneClear: tick('Confirm everyone was clear of the press before the first stroke'),
+    singleStroke: tick('Confirm a single stroke stopped at the top without repeating'),
+    stoppingTimeChecked: tick('Confirm the stopping time measured at about 90° on the downstroke is within the limit'),
+    stoppingTimeMs: decimalNumber({ min: 0.001, max: 5000, message: 'Enter the stopping time in milliseconds, e.g. 180, or leave it empty', minMessage: 'The stopping time is above 0 ms' }).optional(),
+    presenceSensingDistanceOk: z.enum(['yes', 'not_fitted'], 'Say whether the presence-sensing device still sits at a safe distance'),
+    twoHandDevice: z.enum(TWO_HAND_DEVICES, 'Say whether the press has two-hand controls or two-hand trips'),
+    twoHandDistanceOk: tick('Confirm every two-hand station sits at or beyond its safety distance').optional(),
+    strokesPerMinute: decimalNumber({ min: 0.1, max: 2000, message: 'Enter the strokes per minute, e.g. 40', minMessage: 'Strokes per minute are above 0' }).optional(),
+    engagingPoints: wholeNumber({ min: 1, max: 24, message: 'Enter the number of engaging points of the clutch, e.g. 4', minMessage: 'A clutch has at least 1 engaging point' }).optional(),
+  })
+  .superRefine((v, ctx) => {
+    const need = (path: string, message: string) => ctx.addIssue({ code: 'custom', path: [path], message });
+    if (v.twoHandDevice !== 'not_fitted' && v.twoHandDistanceOk !== true) need('twoHandDistanceOk', 'Confirm every two-hand station sits at or beyond its safety distance');
+    if (v.twoHandDevice === 'control' && v.stoppingTimeMs === undefined) need('stoppingTimeMs', 'Enter the measured stopping time: the two-hand control distance is worked out from it');
+    if (v.twoHandDevice === 'trip' && v.strokesPerMinute === undefined) need('strokesPerMinute', 'Enter the strokes per minute: the two-hand trip distance is worked out from it');
+    if (v.twoHandDevice === 'trip' && v.engagingPoints === undefined) need('engagingPoints', 'Enter the engaging points of the clutch: the two-hand trip distance is worked out from it');
+  });
 export type ReturnToService = z.infer<typeof returnToServiceSchema>;
+
+/** What a press left locked out waits for before it may run production again. */
+export const LOCKED_OUT_WAITS_FOR = ['board', 'part', 'maker', 'other'] as const;
+export type LockedOutWaitsFor = (typeof LOCKED_OUT_WAITS_FOR)[number];
+
+export const lockedOutSchema = z
+  .object({
+    reason: text({ min: 3, minMessage: 'Say why the press cannot go back to production', max: 1000 }),
+    waitsFor: z.enum(LOCKED_OUT_WAITS_FOR, 'Say what the press waits for'),
+    waitsForDetail: text({ max: 200 }).optional(),
+  })
+  .superRefine((v, ctx) => {
+    if (v.waitsFor === 'other' && !v.waitsForDetail?.trim()) ctx.addIssue({ code: 'custom', path: ['waitsForDetail'], message: 'Say what the press waits for' });
+  });
+export type LockedOut = z.infer<typeof lockedOutSchema>;
+
+export const AS_LEFT_STATES = ['returned_to_production', 'locked_out'] as const;
+export type AsLeftState = (typeof AS_LEFT_STATES)[number];
 
 export const CAUSE_LABELS = {
   configuration: 'Configuration',
@@ -120,7 +165,7 @@ export const CAUSE_LABELS = {
   none_found: 'No fault found',
 } as const;
 
-export const closeOutSchema = z.object({
+const closeOutCommon = z.object({
   causeCategory: z.enum(['configuration', 'wiring', 'firmware', 'sensor', 'cable', 'board', 'none_found'], 'Choose the root cause'),
   actionsTaken: text({ min: 3, minMessage: 'Describe what you did', max: 4000 }),
   recommendations: text({ max: 4000 }).optional(),
@@ -129,7 +174,6 @@ export const closeOutSchema = z.object({
   travelMinutes: wholeNumber({ min: 0, max: 10_000, message: 'Enter the travel time in whole minutes, e.g. 45 (0 if none)' }),
   controlFirmwareLeft: versionText,
   monitorFirmwareLeft: versionText,
-  returnToService: returnToServiceSchema,
   contactName: nameText({ min: 2, minMessage: "Enter the name of the customer's contact who signs", max: 120 }),
   contactEmail: z.email('Enter the e-mail address the report goes to').max(200),
   /** The signature drawn on the tablet, as a PNG data URL. */
@@ -138,7 +182,38 @@ export const closeOutSchema = z.object({
     .regex(/^data:image\/png;base64,[A-Za-z0-9+/=]+$/, 'Ask the customer to sign in the box')
     .max(2_000_000, 'The signature image is too large'),
 });
+
+/**
+ * The close-out says how the press was left. Returned to production needs the return-to-service
+ * checks; left locked out needs the reason and what it waits for, and no such checks (the press
+ * is not running). A returned-to-production close-out carries no locked-out detail and vice versa.
+ */
+export const closeOutSchema = z.discriminatedUnion(
+  'asLeft',
+  [
+    closeOutCommon.extend({ asLeft: z.literal('returned_to_production'), returnToService: returnToServiceSchema }),
+    closeOutCommon.extend({ asLeft: z.literal('locked_out'), lockedOut: lockedOutSchema }),
+  ],
+  'Say how the press was left: returned to production or left locked out',
+);
 export type CloseOutInput = z.infer<typeof closeOutSchema>;
+
+export const CRANK_ANGLE_SETTINGS_REQUIRED = 'The sensor was replaced or re-aligned: confirm top stop, upstroke-only muting and cam outputs were verified';
+
+/** The close-out for one visit: after sensor work (see `returnToServiceNeeds`) the crank-angle settings check is required. */
+export function closeOutSchemaFor(needs: { crankAngleSettings: boolean }) {
+  if (!needs.crankAngleSettings) return closeOutSchema;
+  return closeOutSchema.superRefine((v, ctx) => {
+    if (v.asLeft === 'returned_to_production' && v.returnToService.crankAngleSettingsVerified !== true) {
+      ctx.addIssue({ code: 'custom', path: ['returnToService', 'crankAngleSettingsVerified'], message: CRANK_ANGLE_SETTINGS_REQUIRED });
+    }
+  });
+}
+
+export const cancelVisitSchema = z.object({
+  reason: text({ min: 3, minMessage: 'Say why this visit is cancelled, e.g. started on the wrong press', max: 500 }),
+});
+export type CancelVisitInput = z.infer<typeof cancelVisitSchema>;
 
 export const reviewDecisionSchema = z.object({
   decision: z.enum(['approve', 'return'], 'Approve the visit or return it'),

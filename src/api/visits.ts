@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import type { Page } from '@shared/schemas/common';
-import type { CloseOutInput, ReadingSaveInput, StepAnswerInput, VisitCreateInput, VisitStatus } from '@shared/schemas/visit';
+import type { CancelVisitInput, CloseOutInput, ReadingSaveInput, StepAnswerInput, VisitCreateInput, VisitStatus } from '@shared/schemas/visit';
 import type { ReadingRecord, VisitDetail, VisitSummary } from '@shared/schemas/visit-detail';
 import { apiRequest } from '@/lib/api-client';
 import { resourceKeys } from './resource';
@@ -75,6 +75,15 @@ export function useReopenVisit() {
   const storeVisit = useStoreVisit();
   return useMutation({
     mutationFn: (visitId: number) => apiRequest<VisitDetail>(`${visitPath(visitId)}/reopen`, { method: 'POST' }),
+    onSuccess: storeVisit,
+  });
+}
+
+/** Cancels an open visit started by mistake, with the reason; it stays on record, marked cancelled. */
+export function useCancelVisit(visitId: number) {
+  const storeVisit = useStoreVisit();
+  return useMutation({
+    mutationFn: (input: CancelVisitInput) => apiRequest<VisitDetail>(`${visitPath(visitId)}/cancel`, { method: 'POST', body: input }),
     onSuccess: storeVisit,
   });
 }

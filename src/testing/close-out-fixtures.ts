@@ -56,13 +56,16 @@ export function visitAtFinding(overrides: Partial<VisitDetail> = {}): VisitDetai
       recommendations: null,
       labourMinutes: null,
       travelMinutes: null,
+      asLeftState: null,
       returnToService: null,
+      lockedOut: null,
       contactName: null,
       contactEmail: null,
       signedAt: null,
       parts: [],
     },
     reviewComment: null,
+    cancellation: null,
     ...overrides,
   };
 }

@@ -10,7 +10,7 @@ import { MAX_ATTEMPTS } from '../../server/modules/emails/retry-policy';
 import { signedInAgent, useApiApp } from '../api-app';
 import { makePress, makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
-import { answer, makeTestBandSet, signaturePng, windingReadings, workToResistanceStep } from '../visit-steps';
+import { answer, makeTestBandSet, returnedToProduction, signaturePng, windingReadings, workToResistanceStep } from '../visit-steps';
 
 /** A port that is free now: nothing listens on it until the test starts its SMTP server there. */
 async function freePort(): Promise<number> {
@@ -90,7 +90,7 @@ async function closeVisit(contactEmail: string): Promise<{ id: number; reference
     parts: [{ id: randomUUID(), partNumber: 'TEST-PART-2', description: 'Sensor (test part)', quantity: 1 }],
     labourMinutes: 60,
     travelMinutes: 30,
-    returnToService: { faultCleared: true, tdcAgrees: true, stoppingTimeChecked: true, presenceSensingDistanceOk: 'not_fitted' },
+    ...returnedToProduction(),
     contactName: 'Pat Plant',
     contactEmail,
     signaturePng: await signaturePng(),

@@ -8,7 +8,7 @@ import { CRANK_ANGLE_PROCEDURE } from '../../shared/data/crank-angle-procedure';
 import { anonymous, signedInAgent, useApiApp } from '../api-app';
 import { makePress, makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
-import { answer, makeTestBandSet, reading, signaturePng, windingReadings, workToResistanceStep } from '../visit-steps';
+import { answer, makeTestBandSet, reading, returnedToProduction, signaturePng, windingReadings, workToResistanceStep } from '../visit-steps';
 
 // What the API refuses at the edge: text PostgreSQL cannot store (NUL, lone surrogates), control and
 // direction characters in names, ids that are not plain whole numbers in range, dates that are not on
@@ -34,7 +34,7 @@ async function closeOutBody() {
     parts: [{ id: randomUUID(), partNumber: 'TEST-PART-1', description: 'Sensor (test part)', quantity: 1 }],
     labourMinutes: 95,
     travelMinutes: 40,
-    returnToService: { faultCleared: true, tdcAgrees: true, stoppingTimeChecked: true, stoppingTimeMs: 180, presenceSensingDistanceOk: 'yes' },
+    ...returnedToProduction({ stoppingTimeMs: 180, presenceSensingDistanceOk: 'yes' }),
     contactName: 'Pat Plant',
     contactEmail: 'pat@plant.example',
     signaturePng: await signaturePng(),

@@ -6,7 +6,7 @@ import type { PressHistory } from '../../shared/schemas/manager-figures';
 import { signedInAgent, useApiApp } from '../api-app';
 import { makePress, makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
-import { answer, makeTestBandSet, signaturePng, windingReadings, workToResistanceStep } from '../visit-steps';
+import { answer, makeTestBandSet, returnedToProduction, signaturePng, windingReadings, workToResistanceStep } from '../visit-steps';
 
 const db = useTestDatabase();
 const { app } = useApiApp(db);
@@ -33,7 +33,7 @@ async function closedVisit(): Promise<number> {
     parts: [{ id: randomUUID(), partNumber: 'TEST-PART-9', description: 'Sensor (test part)', quantity: 1 }],
     labourMinutes: 75,
     travelMinutes: 30,
-    returnToService: { faultCleared: true, tdcAgrees: true, stoppingTimeChecked: true, presenceSensingDistanceOk: 'not_fitted' },
+    ...returnedToProduction(),
     contactName: 'Pat Plant',
     contactEmail: 'pat@plant.example',
     signaturePng: await signaturePng(),

@@ -77,7 +77,7 @@ describe('creating and updating presses', () => {
     expect(res.body.error.fields).toMatchObject({
       assetTag: 'Enter the asset tag painted or labelled on the press',
       model: expect.any(String),
-      tonnage: 'Tonnage must be at least 1',
+      tonnage: 'Capacity must be at least 1',
       controlFirmware: 'Type a dotted version such as 2.10 or 3.1.4',
     });
   });

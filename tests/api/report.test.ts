@@ -11,7 +11,7 @@ import { readReportLink, reportLinkKey, signReportLink } from '../../server/modu
 import { anonymous, signedInAgent, useApiApp } from '../api-app';
 import { makePress, makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
-import { answer, makeTestBandSet, reading, signaturePng, windingReadings, workToResistanceStep } from '../visit-steps';
+import { answer, makeTestBandSet, reading, returnedToProduction, signaturePng, windingReadings, workToResistanceStep } from '../visit-steps';
 
 const db = useTestDatabase();
 const ENV = { PUBLIC_BASE_URL: 'http://reports.test', COMPANY_NAME: 'Test Press Service (made up for tests)' };
@@ -38,7 +38,7 @@ async function closeOutBody(contactEmail = 'pat@plant.example') {
     parts: [{ id: randomUUID(), partNumber: 'TEST-PART-1', description: 'Sensor (test part)', quantity: 1, serialRemoved: 'OLD-1', serialFitted: 'NEW-1' }],
     labourMinutes: 95,
     travelMinutes: 40,
-    returnToService: { faultCleared: true, tdcAgrees: true, stoppingTimeChecked: true, stoppingTimeMs: 180, presenceSensingDistanceOk: 'yes' },
+    ...returnedToProduction({ stoppingTimeMs: 180, presenceSensingDistanceOk: 'yes' }),
     contactName: 'Pat Plant',
     contactEmail,
     signaturePng: await signaturePng(),
@@ -106,6 +106,9 @@ describe('closing a visit queues its report', () => {
       expect(text).toContain(fact);
     }
     expect(text).toMatch(/- Rotor R1–R2, control end: OL — ○ Open circuit\./);
+    // The as-left state is the e-mail's first line after the title, in the record's words.
+    expect(text.split('\n').slice(0, 2)).toEqual([`Service report ${v.reference} from ${ENV.COMPANY_NAME}`, 'Press returned to production.']);
+    expect(html.indexOf('Press returned to production.')).toBeLessThan(html.indexOf('Customer'));
     for (const fact of [`Service report ${v.reference}`, 'Labour (h:mm)', '1:35', 'Rotor R1–R2', 'Open circuit']) expect(html).toContain(fact);
   });
 
@@ -146,8 +149,13 @@ describe("the customer's report link", () => {
     expect(report.path.finding).not.toBeNull();
     expect(report.safety.map((s) => s.signalWord)).toEqual(expect.arrayContaining(['DANGER', 'WARNING', 'CAUTION']));
     expect(report.safety.some((s) => s.text.includes('lock out and tag out'))).toBe(true);
-    expect(report.asLeft).toMatchObject({ state: 'returned_to_production', stoppingTimeMs: 180 });
-    expect(report.asLeft?.checks.map((c) => c.key)).toEqual(['faultCleared', 'tdcAgrees', 'stoppingTimeChecked', 'presenceSensing']);
+    expect(report.asLeft).toMatchObject({ state: 'returned_to_production', headline: 'Press returned to production', stoppingTimeMs: 180 });
+    const asLeft = report.asLeft?.state === 'returned_to_production' ? report.asLeft : null;
+    expect(asLeft?.checks.map((c) => c.key)).toEqual([
+      'faultCleared', 'tdcAgrees', 'crankAngleSettings', 'guardsRefitted', 'toolsRemoved', 'everyoneClear', 'singleStroke', 'stoppingTimeChecked', 'presenceSensing', 'twoHand',
+    ]);
+    // OSHA 29 CFR 1910.217(c)(3)(iii)(e): 63 in/s × 0.18 s = 11.34 in → 11.4 in; × 25.4 = 288.036 mm → 288.1 mm (worked by hand).
+    expect(asLeft?.distances).toEqual(['Presence-sensing device: minimum safety distance 11.4 in (288.1 mm), OSHA 29 CFR 1910.217(c)(3)(iii)(e): Ds = 63 in/s × 0.18 s; rounded up.']);
     expect(report.times).toMatchObject({ labourMinutes: 95, travelMinutes: 40 });
     expect(report.work.cause).toEqual({ category: 'sensor', label: 'Sensor' });
     expect(report.photos).toHaveLength(1);
@@ -190,7 +198,9 @@ describe("the customer's report link", () => {
     expect(text).toContain('Pat Plant');
     expect(text).toContain('Measured stopping time: 180 ms.');
     expect(text).toContain('Labour (h:mm) 1:35');
-    expect(text).toContain('Returned to production after the return-to-service checks');
+    // The as-left state is the PDF's first line after the company and the title.
+    expect(text.startsWith(`${ENV.COMPANY_NAME} Service report ${v.reference} Press returned to production`)).toBe(true);
+    expect(text).toContain('Presence-sensing device: minimum safety distance 11.4 in (288.1 mm)');
     expect(text).toContain('Sensor connector');
   });
 

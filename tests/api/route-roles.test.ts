@@ -6,7 +6,7 @@ import { anonymous, signedInAgent, useApiApp } from '../api-app';
 import { makePress, makeUser } from '../factories';
 import { listRoutes } from '../route-list';
 import { useTestDatabase } from '../setup/database';
-import { makeTestBandSet, signaturePng, workToResistanceStep } from '../visit-steps';
+import { makeTestBandSet, returnedToProduction, signaturePng, workToResistanceStep } from '../visit-steps';
 
 // The route × role table. The list of routes comes from the app itself, so a route added without a
 // row here fails this file. Each row says what each caller gets, in this order:
@@ -30,6 +30,8 @@ interface Fixtures {
   closeOut: Record<string, unknown>;
   /** A photo made just for one call (the delete route uses up its photo). */
   freshPhoto: () => Promise<string>;
+  /** A new open visit of the owner's, for a call that ends it. */
+  freshVisit: () => Promise<number>;
 }
 
 interface Call {
@@ -98,6 +100,11 @@ const TABLE: Record<string, Row> = {
   'POST /api/visits/:id/close': { call: (f) => ({ path: `/api/visits/${f.visitId}/close`, body: f.closeOut }), expect: [401, 409, 404, 409, 409] },
   // The visit was not returned, so whoever gets through is told so (409).
   'POST /api/visits/:id/reopen': { call: (f) => ({ path: `/api/visits/${f.visitId}/reopen` }), expect: [401, 409, 404, 409, 409] },
+  // Each caller gets a visit of its own to cancel (the owner's), so a cancel does not end the shared one.
+  'POST /api/visits/:id/cancel': {
+    call: async (f) => ({ path: `/api/visits/${await f.freshVisit()}/cancel`, body: { reason: 'Started on the wrong press' } }),
+    expect: [401, 200, 404, 200, 200],
+  },
   'POST /api/visits/:id/review': { call: (f) => ({ path: `/api/visits/${f.visitId}/review`, body: { decision: 'approve' } }), expect: [401, 403, 403, 409, 409] },
   'GET /api/visits/:visitId/attachments': { call: (f) => ({ path: `/api/visits/${f.visitId}/attachments` }), expect: VISIT_READ },
   'POST /api/visits/:visitId/attachments': { call: (f) => ({ path: `/api/visits/${f.visitId}/attachments`, photo: true }), expect: [401, 201, 404, 201, 201] },
@@ -197,10 +204,14 @@ beforeAll(async () => {
       actionsTaken: 'Replaced the crank-angle sensor.',
       labourMinutes: 60,
       travelMinutes: 30,
-      returnToService: { faultCleared: true, tdcAgrees: true, stoppingTimeChecked: true, presenceSensingDistanceOk: 'yes' },
+      ...returnedToProduction({ presenceSensingDistanceOk: 'yes' }),
       contactName: 'Pat Plant',
       contactEmail: 'pat@plant.example',
       signaturePng: await signaturePng(),
+    },
+    freshVisit: async () => {
+      const res = await agents.owner.post('/api/visits').send({ pressId: press.id, faultDisplayed: 'Crank angle fault 31' });
+      return (res.body as { id: number }).id;
     },
     freshPhoto: async () => {
       const res = await uploadPhoto(agents.owner, visitId);

@@ -5,7 +5,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { signedInAgent, useApiApp } from '../api-app';
 import { makePress, makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
-import { answer, makeTestBandSet, windingReadings, workToResistanceStep } from '../visit-steps';
+import { answer, makeTestBandSet, returnedToProduction, windingReadings, workToResistanceStep } from '../visit-steps';
 
 // Two requests that change the same visit at the same moment: one wins, the other answers 409
 // (or, for a retried save, the stored row), never 500, and nothing half-done is left behind.
@@ -33,7 +33,7 @@ async function closeOutBody(width = 300, parts = [{ id: randomUUID(), partNumber
     parts,
     labourMinutes: 60,
     travelMinutes: 20,
-    returnToService: { faultCleared: true, tdcAgrees: true, stoppingTimeChecked: true, presenceSensingDistanceOk: 'not_fitted' },
+    ...returnedToProduction(),
     contactName: 'Pat Plant',
     contactEmail: 'pat@plant.example',
     signaturePng: await signatureOfWidth(width),

@@ -4,7 +4,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { signedInAgent, useApiApp } from '../api-app';
 import { makePress, makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
-import { answer, makeTestBandSet, reading, signaturePng, windingReadings, workToResistanceStep } from '../visit-steps';
+import { answer, makeTestBandSet, reading, returnedToProduction, signaturePng, windingReadings, workToResistanceStep } from '../visit-steps';
 
 const db = useTestDatabase();
 const { app } = useApiApp(db);
@@ -39,7 +39,7 @@ async function closeOutBody() {
     parts: [{ id: randomUUID(), partNumber: 'TEST-PART-1', description: 'Sensor (test part)', quantity: 1, serialRemoved: 'OLD-1', serialFitted: 'NEW-1' }],
     labourMinutes: 95,
     travelMinutes: 40,
-    returnToService: { faultCleared: true, tdcAgrees: true, stoppingTimeChecked: true, stoppingTimeMs: 180, presenceSensingDistanceOk: 'yes' },
+    ...returnedToProduction({ stoppingTimeMs: 180, presenceSensingDistanceOk: 'yes' }),
     contactName: 'Pat Plant',
     contactEmail: 'pat@plant.example',
     signaturePng: await signaturePng(),
@@ -80,7 +80,8 @@ describe('working the steps', () => {
     const v = await startVisit();
     const res = await answer(tech, v.id, 'monitor-jumper', { outcome: 'yes' });
     expect(res.status).toBe(409);
-    expect(res.body.error.message).toMatch(/Answer the current step first/);
+    expect(res.body.error.code).toBe('step_not_reached');
+    expect(res.body.error.message).toMatch(/"Bring the press to rest" comes first/);
   });
 
   it('decides the firmware outcome itself from the rules, whatever the client says', async () => {

@@ -81,11 +81,19 @@ async function closeOut(page: Page, { parts }: { parts: boolean }) {
   }
   await page.getByLabel('Labour minutes').fill('95');
   await page.getByLabel('Travel minutes').fill('40');
+  expect(await page.getByRole('radio', { name: /^Returned to production/ }).isChecked()).toBe(true);
   await page.getByLabel('The fault has cleared on the control').check();
   await page.getByLabel(/The crank-angle display reads top dead centre/).check();
-  await page.getByLabel('The stopping-time / brake-monitor check passed').check();
+  // The sensor was replaced: the settings taken from the crank angle are asked for too.
+  await page.getByLabel(/every setting taken from the crank angle is verified/).check();
+  await page.getByLabel(/Every guard, cover and enclosure door is back in place/).check();
+  await page.getByLabel('Every tool and die safety block is out of the press').check();
+  await page.getByLabel('Everyone was clear of the press before the first stroke').check();
+  await page.getByLabel('A single stroke stopped at the top without repeating').check();
+  await page.getByLabel(/The stopping time, measured at about 90° on the downstroke/).check();
   await page.getByLabel('Measured stopping time in ms (optional)').fill('180');
   await page.getByRole('radio', { name: 'At or beyond its safety distance' }).check();
+  await page.getByRole('radio', { name: 'Neither fitted' }).check();
   expect(await page.getByLabel('Contact e-mail').inputValue()).toBe(CONTACT);
   await drawSignature(page);
 }

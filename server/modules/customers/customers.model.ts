@@ -1,5 +1,6 @@
-import { DataTypes, type NonAttribute, type Sequelize } from 'sequelize';
-import { optional, required, serialId, SerialRow, timestamps } from '../../db/columns';
+import { DataTypes, type CreationOptional, type NonAttribute, type Sequelize } from 'sequelize';
+import { optional, required, serialId, SerialRow, timestamps, withDefault } from '../../db/columns';
+import type { CapacityUnit } from '../../../shared/format/capacity';
 import type { Site } from '../sites/sites.model';
 
 export class Customer extends SerialRow<Customer> {
@@ -8,6 +9,7 @@ export class Customer extends SerialRow<Customer> {
   declare contactEmail: string | null;
   declare contactPhone: string | null;
   declare notes: string | null;
+  declare capacityUnit: CreationOptional<CapacityUnit>;
   declare sites?: NonAttribute<Site[]>;
 }
 
@@ -17,7 +19,8 @@ export function initCustomer(sequelize: Sequelize): void {
       ...serialId(),
       ...required(DataTypes.TEXT, 'name'),
       ...optional(DataTypes.TEXT, 'contactName', 'contactEmail', 'contactPhone', 'notes'),
-      ...timestamps(),
+      capacityUnit: withDefault(DataTypes.TEXT, 'us_ton'),
+    ...timestamps(),
     },
     { sequelize, tableName: 'customers' },
   );

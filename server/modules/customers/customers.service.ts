@@ -12,6 +12,7 @@ export function toCustomerDto(c: Customer): CustomerDto {
     contactEmail: c.contactEmail,
     contactPhone: c.contactPhone,
     notes: c.notes,
+    capacityUnit: c.capacityUnit,
     ...isoTimestamps(c),
   };
 }

@@ -8,18 +8,24 @@ import { BoundParams } from './bound-params';
 //
 // - Period: visits whose closedAt falls on a day from `from` to `to` inclusive, in the office's
 //   time zone. "Closed" means status closed or approved: a returned visit is being reworked and
-//   counts when it is closed again (its closedAt is then the later close).
-// - First-time fix: a closed visit after which no other visit on the same press starts within N
-//   days of its close (N = the repeat window, default 30). We refine the plain definition in one
-//   way: a visit closed less than N days before `asOf` is "pending", not a success, unless a repeat
-//   has already come (then it is already a failure). Rate = fixed / judged, so a quiet last month
-//   does not flatter the rate. "No fault found" visits count like any other.
+//   counts when it is closed again (its closedAt is then the later close). Cancelled visits (started
+//   by mistake) are never closed and never count as a visit that came back.
+// - Both windows are anchored the same way, at the earlier visit's close: a later visit on the same
+//   press starting within N days (N = the repeat window, default 30) of that close is a return.
+// - First-time fix: a closed visit with the press returned to production after which no other visit
+//   on the press starts within N days of its close. A press left locked out was not fixed on that
+//   visit, so it is left out (neither fixed nor failed). We refine the plain definition in one way:
+//   a visit closed less than N days before `asOf` is "pending", not a success, unless a repeat has
+//   already come (then it is already a failure). Rate = fixed / judged, so a quiet last month does
+//   not flatter the rate. "No fault found" visits count like any other.
 // - Time to repair: closedAt − startedAt in minutes (wall-clock time from starting the visit at the
-//   press to the customer's sign-off), mean and median over the period's closed visits.
+//   press to the customer's sign-off), mean and median over the period's closed visits that returned
+//   the press to production (a press left locked out was not repaired).
 // - Cause mix: closed visits counted by cause category per calendar month of closedAt.
-// - Repeat visits: a visit that starts within N days (inclusive) of the start of the previous visit
-//   on the same press, listed as (previous, repeat) pairs whose repeat started in the period. Only
-//   consecutive visits are paired, so three visits in one week are two repeats, not three pairs.
+// - Repeat visits: a visit that starts within N days (inclusive) of the close of the previous visit
+//   on the same press (its start while it is still open), listed as (previous, repeat) pairs whose
+//   repeat started in the period. Only consecutive visits are paired, so three visits in one week
+//   are two repeats, not three pairs.
 
 export interface FiguresWindow {
   from: string;
@@ -31,6 +37,7 @@ export interface FiguresWindow {
 
 const db = () => Visit.sequelize!;
 const CLOSED = `v.status IN ('closed', 'approved')`;
+const REPAIRED = `${CLOSED} AND v.as_left_state IS DISTINCT FROM 'locked_out'`;
 
 /** Bound start and end (exclusive) of the period, whole days in the office's zone. */
 function period(w: FiguresWindow, p: BoundParams, column: string) {
@@ -50,10 +57,10 @@ export async function firstTimeFixCounts(w: FiguresWindow) {
     WITH closed AS (
       SELECT v.closed_at + ${days} <= ${asOf}::timestamptz AS window_over,
              EXISTS (SELECT 1 FROM visits w
-                     WHERE w.press_id = v.press_id AND w.id <> v.id
+                     WHERE w.press_id = v.press_id AND w.id <> v.id AND w.status <> 'cancelled'
                        AND w.started_at > v.started_at AND w.started_at <= v.closed_at + ${days}) AS came_back
       FROM visits v
-      WHERE ${CLOSED} AND ${period(w, p, 'v.closed_at')}
+      WHERE ${REPAIRED} AND ${period(w, p, 'v.closed_at')}
     )
     SELECT count(*)::int AS closed_visits,
            count(*) FILTER (WHERE window_over OR came_back)::int AS judged,
@@ -71,7 +78,7 @@ export async function timeToRepair(w: FiguresWindow) {
            avg(${minutes})::float8 AS mean_minutes,
            percentile_cont(0.5) WITHIN GROUP (ORDER BY ${minutes})::float8 AS median_minutes
     FROM visits v
-    WHERE ${CLOSED} AND v.started_at IS NOT NULL AND ${period(w, p, 'v.closed_at')}`;
+    WHERE ${REPAIRED} AND v.started_at IS NOT NULL AND ${period(w, p, 'v.closed_at')}`;
   const [row] = await select<{ visits: number; mean_minutes: number | null; median_minutes: number | null }>(sql, p);
   return row!;
 }
@@ -112,21 +119,27 @@ export async function repeatPairs(w: FiguresWindow, limit: number): Promise<Repe
   const tz = p.add(w.tz);
   const start = `(${p.add(w.from)}::date::timestamp AT TIME ZONE ${tz})`;
   const end = `((${p.add(w.to)}::date + 1)::timestamp AT TIME ZONE ${tz})`;
+  // The previous visit is found per later visit (visits_press_started_idx), so one that started
+  // long before the period but closed inside the window is still its predecessor.
   const sql = `
     WITH ordered AS (
-      SELECT v.id, v.started_at,
-             lag(v.id) OVER per_press AS prev_id,
-             lag(v.started_at) OVER per_press AS prev_started_at
+      SELECT v.id, v.started_at, prev.id AS prev_id, COALESCE(prev.closed_at, prev.started_at) AS prev_anchor
       FROM visits v
-      WHERE v.started_at >= ${start} - ${days} AND v.started_at < ${end}
-      WINDOW per_press AS (PARTITION BY v.press_id ORDER BY v.started_at, v.id)
+      JOIN LATERAL (
+        SELECT e.id, e.started_at, e.closed_at FROM visits e
+        WHERE e.press_id = v.press_id AND e.status <> 'cancelled' AND e.started_at IS NOT NULL
+          AND (e.started_at, e.id) < (v.started_at, v.id)
+        ORDER BY e.started_at DESC, e.id DESC
+        LIMIT 1
+      ) prev ON true
+      WHERE v.status <> 'cancelled' AND v.started_at >= ${start} AND v.started_at < ${end}
     )
     SELECT p.id AS press_id, p.asset_tag, s.name AS site_name, c.name AS customer_name,
            e.id AS earlier_id, e.started_at AS earlier_started_at, e.status AS earlier_status,
            e.cause_category AS earlier_cause, eu.name AS earlier_technician,
            l.id AS later_id, l.started_at AS later_started_at, l.status AS later_status,
            l.cause_category AS later_cause, lu.name AS later_technician,
-           (extract(epoch FROM (o.started_at - o.prev_started_at)) / 86400)::float8 AS days_apart
+           (extract(epoch FROM (o.started_at - o.prev_anchor)) / 86400)::float8 AS days_apart
     FROM ordered o
     JOIN visits l ON l.id = o.id
     JOIN visits e ON e.id = o.prev_id
@@ -135,7 +148,7 @@ export async function repeatPairs(w: FiguresWindow, limit: number): Promise<Repe
     JOIN presses p ON p.id = l.press_id
     JOIN sites s ON s.id = p.site_id
     JOIN customers c ON c.id = s.customer_id
-    WHERE o.started_at >= ${start} AND o.started_at - o.prev_started_at <= ${days}
+    WHERE o.started_at - o.prev_anchor <= ${days}
     ORDER BY o.started_at DESC, o.id DESC
     LIMIT ${p.add(limit)}`;
   return select<RepeatRow>(sql, p);

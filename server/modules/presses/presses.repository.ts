@@ -9,7 +9,7 @@ const withSiteAndCustomer = {
   model: Site,
   as: 'site',
   attributes: ['id', 'name', 'customerId'],
-  include: [{ model: Customer, as: 'customer', attributes: ['id', 'name'] }],
+  include: [{ model: Customer, as: 'customer', attributes: ['id', 'name', 'capacityUnit'] }],
 };
 
 /** Free text matches asset tag, model, site or customer name: what a technician reads off the press or the work order. */

@@ -13,6 +13,7 @@ export function toPressDto(p: Press): PressDto {
     assetTag: p.assetTag,
     model: p.model,
     tonnage: p.tonnage,
+    capacityUnit: p.site?.customer?.capacityUnit ?? 'us_ton',
     controlModel: p.controlModel,
     sensorGeneration: p.sensorGeneration,
     controlFirmware: p.controlFirmware,

@@ -1,6 +1,6 @@
 import { formatDateTime } from '../../../shared/format/date-time';
 import { formatMinutes } from '../../../shared/format/minutes';
-import { RECORD_LABELS as L, RECORD_SECTIONS as S, RECORD_WORDS as W } from '../../../shared/record/record-wording';
+import { lockedOutReasonLine, RECORD_LABELS as L, RECORD_SECTIONS as S, RECORD_WORDS as W } from '../../../shared/record/record-wording';
 import type { VisitRecord } from '../../../shared/schemas/visit-record';
 
 const esc = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
@@ -40,10 +40,19 @@ function summaryRows({ record }: Context): [string, string][] {
 
 const expiryOf = (record: VisitRecord) => formatDateTime(record.issue?.expiresAt ?? null, record.timeZone);
 
+/** The as-left lines that open the e-mail: the headline, and for a locked-out press the reason. */
+function asLeftLines(record: VisitRecord): string[] {
+  if (!record.asLeft) return [];
+  return record.asLeft.state === 'locked_out' ? [record.asLeft.headline + '.', lockedOutReasonLine(record.asLeft.reason)] : [record.asLeft.headline + '.'];
+}
+
+const safetyLine = (record: VisitRecord) => (record.asLeft?.state === 'locked_out' ? W.emailSafetyLockedOut : W.emailSafety);
+
 export function reportEmailText(ctx: Context): string {
   const { record, link } = ctx;
   const lines = [
     `${record.title} from ${record.companyName}`,
+    ...asLeftLines(record),
     '',
     record.issue?.corrected ? `${W.correctedNotice}\n` : '',
     ...summaryRows(ctx).map(([k, v]) => `${k}: ${v}`),
@@ -57,7 +66,7 @@ export function reportEmailText(ctx: Context): string {
     link,
     `The link is personal to this visit and stops working on ${expiryOf(record)}.`,
     '',
-    `Safety: ${W.emailSafety}`,
+    `Safety: ${safetyLine(record)}`,
     '',
     `— ${record.companyName}`,
   ];
@@ -65,6 +74,14 @@ export function reportEmailText(ctx: Context): string {
 }
 
 const cell = 'padding:6px 10px;border-bottom:1px solid #D3D7DC;font-family:Arial,Helvetica,sans-serif;font-size:15px;line-height:1.4;color:#15191E;vertical-align:top;';
+
+function asLeftHtml(record: VisitRecord): string {
+  const lines = asLeftLines(record);
+  if (lines.length === 0) return '';
+  const frame = record.asLeft?.state === 'locked_out' ? 'border:3px solid #15191E;background:#ECEEF0;' : 'border:3px solid #1B6E34;background:#E6F4EA;';
+  const [headline, ...rest] = lines;
+  return `<p style="margin:0 0 16px;padding:10px 12px;${frame}font-family:Arial,Helvetica,sans-serif;font-size:17px;line-height:1.4;color:#15191E;"><strong>${esc(headline!)}</strong>${rest.map((l) => `<br>${esc(l)}`).join('')}</p>\n`;
+}
 
 export function reportEmailHtml(ctx: Context): string {
   const { record, link } = ctx;
@@ -89,14 +106,14 @@ export function reportEmailHtml(ctx: Context): string {
 <tr><td style="padding:20px 20px 8px;font-family:Arial,Helvetica,sans-serif;color:#15191E;">
 <p style="margin:0;font-size:14px;color:#48515B;font-weight:bold;">${esc(record.companyName)}</p>
 <h1 style="margin:4px 0 16px;font-size:24px;line-height:1.25;">${esc(record.title)}</h1>
-${corrected}
+${asLeftHtml(record)}${corrected}
 <table role="presentation" width="100%" cellpadding="0" cellspacing="0">${rows}</table>
 <h2 style="margin:20px 0 8px;font-size:18px;">${esc(S.readings)}</h2>
 ${readings ? `<table role="presentation" width="100%" cellpadding="0" cellspacing="0"><tr><th align="left" style="${cell}color:#48515B;">Circuit</th><th align="left" style="${cell}color:#48515B;">Entered</th><th align="left" style="${cell}color:#48515B;">Verdict</th><th align="left" style="${cell}color:#48515B;">Why</th></tr>${readings}</table>` : `<p style="font-size:15px;">None on the path taken.</p>`}
 <p style="margin:20px 0 8px;font-size:15px;line-height:1.5;">The full report, with every reading, photo and safety statement, is attached as a PDF. You can also open it online and acknowledge that you received it:</p>
 <p style="margin:0 0 8px;"><a href="${esc(link)}" style="display:inline-block;padding:12px 20px;background:#1F4BB8;color:#FFFFFF;font-size:16px;font-weight:bold;text-decoration:none;border-radius:6px;">Open the report</a></p>
 <p style="margin:0 0 16px;font-size:13px;color:#48515B;word-break:break-all;">${esc(link)}<br>This link is for this visit only and stops working on ${esc(expiryOf(record))}.</p>
-<p style="margin:0 0 20px;padding:10px 12px;border:2px solid #FF7900;background:#FFF1E5;font-size:14px;line-height:1.5;"><strong>WARNING:</strong> ${esc(W.emailSafety)}</p>
+<p style="margin:0 0 20px;padding:10px 12px;border:2px solid #FF7900;background:#FFF1E5;font-size:14px;line-height:1.5;"><strong>WARNING:</strong> ${esc(safetyLine(record))}</p>
 </td></tr></table>
 </td></tr></table>
 </body></html>`;

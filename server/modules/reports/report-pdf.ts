@@ -3,6 +3,7 @@ import { formatMinutes } from '../../../shared/format/minutes';
 import {
   acknowledgementLine,
   firmwareLine,
+  lockedOutReasonLine,
   noLongerApplyNote,
   photoLabel,
   recommendedByProcedure,
@@ -29,6 +30,9 @@ function titleBlock(doc: Doc, record: VisitRecord): void {
   const tz = record.timeZone;
   doc.font('bold').fontSize(11).fillColor(MUTED).text(record.companyName);
   doc.font('bold').fontSize(20).fillColor(INK).text(record.title);
+  // How the press was left comes first, before anything else a reader might stop at.
+  if (record.asLeft) doc.font('bold').fontSize(14).fillColor(INK).text(record.asLeft.headline);
+  if (record.asLeft?.state === 'locked_out') doc.font('body').fontSize(11).fillColor(INK).text(lockedOutReasonLine(record.asLeft.reason));
   const issued = record.issue ? `Issued ${formatDateTime(record.issue.issuedAt, tz)}` : `Printed ${formatDateTime(new Date().toISOString(), tz)}`;
   const corrected = record.issue?.corrected ? ` · Issue ${record.issue.number}: replaces every earlier report of this visit` : '';
   doc.font('body').fontSize(10).fillColor(MUTED).text(`${issued}${corrected}`);
@@ -196,10 +200,15 @@ export async function renderReportPdf(record: VisitRecord, images: ReportImages)
   workSection(doc, record);
 
   heading(doc, S.asLeft);
-  if (record.asLeft) {
-    paragraph(doc, record.asLeft.label, { bold: true });
-    for (const check of record.asLeft.checks) paragraph(doc, `✓ ${check.text}`);
-    if (record.asLeft.stoppingTimeMs !== null) paragraph(doc, stoppingTimeLine(record.asLeft.stoppingTimeMs));
+  const asLeft = record.asLeft;
+  if (asLeft?.state === 'locked_out') {
+    paragraph(doc, `${asLeft.headline}.`, { bold: true });
+    paragraph(doc, lockedOutReasonLine(asLeft.reason));
+  } else if (asLeft) {
+    paragraph(doc, `${asLeft.headline}.`, { bold: true });
+    for (const check of asLeft.checks) paragraph(doc, `✓ ${check.text}`);
+    if (asLeft.stoppingTimeMs !== null) paragraph(doc, stoppingTimeLine(asLeft.stoppingTimeMs));
+    for (const line of asLeft.distances) paragraph(doc, line);
   } else {
     paragraph(doc, W.checksNotRecorded, { bold: true });
   }

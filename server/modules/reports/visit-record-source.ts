@@ -31,6 +31,7 @@ export async function readVisitRecordSource(visitId: number, options: RecordOpti
   const attachments = await Attachment.findAll({ where: { visitId }, order: [['createdAt', 'ASC'], ['id', 'ASC']], transaction });
   const peopleIds = [...new Set(ctx.results.map((r) => r.createdBy))];
   const people = peopleIds.length ? await User.findAll({ where: { id: peopleIds }, attributes: ['id', 'name'], transaction }) : [];
+  const cancelledBy = visit.cancelledBy ? await User.findByPk(visit.cancelledBy, { attributes: ['id', 'name'], transaction }) : null;
   const press = visit.press!;
   const site = press.site!;
   return {
@@ -48,7 +49,10 @@ export async function readVisitRecordSource(visitId: number, options: RecordOpti
       recommendations: visit.recommendations,
       labourMinutes: visit.labourMinutes,
       travelMinutes: visit.travelMinutes,
+      asLeftState: visit.asLeftState,
       returnToService: visit.returnToService,
+      lockedOut: visit.lockedOut,
+      cancellation: visit.cancelledAt ? { at: visit.cancelledAt.toISOString(), by: cancelledBy?.name ?? null, reason: visit.cancelReason ?? '' } : null,
       contactName: visit.contactName,
       contactEmail: visit.contactEmail,
       controlFirmwareFound: visit.controlFirmwareFound,
@@ -58,7 +62,7 @@ export async function readVisitRecordSource(visitId: number, options: RecordOpti
     },
     customer: { name: site.customer!.name },
     site: { name: site.name, address: site.address, city: site.city },
-    press: { assetTag: press.assetTag, model: press.model, tonnage: press.tonnage, controlModel: press.controlModel, sensorGeneration: press.sensorGeneration },
+    press: { assetTag: press.assetTag, model: press.model, tonnage: press.tonnage, capacityUnit: site.customer!.capacityUnit, controlModel: press.controlModel, sensorGeneration: press.sensorGeneration },
     technicianName: visit.technician?.name ?? '',
     procedure: { title: ctx.procedure.title, version: ctx.procedure.version, definition: ctx.definition },
     bandSet: ctx.bandSet ? { label: ctx.bandSet.label, generation: ctx.bandSet.generation, version: ctx.bandSet.version, bands: ctx.bandSet.bands } : null,

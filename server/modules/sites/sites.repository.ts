@@ -4,7 +4,7 @@ import { likePattern, pageWindow } from '../../lib/paging';
 import { Customer } from '../customers/customers.model';
 import { Site } from './sites.model';
 
-const withCustomer = { model: Customer, as: 'customer', attributes: ['id', 'name'] };
+const withCustomer = { model: Customer, as: 'customer', attributes: ['id', 'name', 'capacityUnit'] };
 
 export function listSites(q: SiteListQuery) {
   const where: WhereOptions[] = [];

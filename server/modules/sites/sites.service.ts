@@ -8,6 +8,7 @@ export function toSiteDto(s: Site): SiteDto {
     id: s.id,
     customerId: s.customerId,
     customerName: s.customer?.name,
+    capacityUnit: s.customer?.capacityUnit ?? 'us_ton',
     name: s.name,
     address: s.address,
     city: s.city,

@@ -10,7 +10,7 @@ import { loadWritableVisit } from './visit-access.service';
 import { bandValues, currentReadings, findStep, loadVisitContext, type VisitContext } from './visit-context.service';
 import { readingDto } from './visit-dto';
 import { SavedMeanwhile, saveOnce } from './save-once';
-import { toReadingInput } from './visit-state';
+import { assertReachable, toReadingInput } from './visit-state';
 import { Reading } from './visit-work.model';
 import { detailById, getVisitDetail } from './visits.service';
 import { Visit } from './visits.model';
@@ -65,6 +65,7 @@ async function storeReading(user: SessionUser, visitId: number, input: ReadingSa
     if (await Reading.findByPk(input.id, { transaction })) throw new SavedMeanwhile();
     const ctx = await loadVisitContext(visit, transaction);
     const step = findStep(ctx, input.stepId);
+    assertReachable(ctx, input.stepId);
     if (step.kind !== 'measure') throw new AppError(400, 'invalid_input', `Step "${step.id}" takes no readings.`);
     const spec = step.readings.find((s) => s.quantity === input.quantity && s.circuit === input.circuit && s.position === input.position);
     if (!spec) throw new AppError(400, 'invalid_input', `Step "${step.id}" has no ${input.quantity} reading of ${input.circuit} at the ${input.position.replace('_', ' ')}.`);

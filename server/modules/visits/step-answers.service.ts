@@ -9,7 +9,7 @@ import { AppError } from '../../lib/errors';
 import { audit } from '../audit/audit';
 import { loadWritableVisit } from './visit-access.service';
 import { bandValues, findStep, latestPublishedBandSet, loadVisitContext, type VisitContext } from './visit-context.service';
-import { missingReadings, stepReadings, toReadingInput, traverse } from './visit-state';
+import { assertReachable, missingReadings, stepReadings, toReadingInput } from './visit-state';
 import { SavedMeanwhile, saveOnce } from './save-once';
 import { StepResult } from './visit-work.model';
 import { rejudgeVisitReadings } from './readings.service';
@@ -17,15 +17,6 @@ import { detailById, getVisitDetail } from './visits.service';
 import { Visit } from './visits.model';
 
 const invalid = (field: string, message: string) => new AppError(400, 'invalid_input', 'Some fields need attention.', { [field]: message });
-
-/** Only steps on the path taken, or the step waiting now, may be answered. */
-function assertReachable(ctx: VisitContext, stepId: string): void {
-  const t = traverse(ctx);
-  const reachable = t.path.some((p) => p.stepId === stepId) || t.current?.id === stepId;
-  if (!reachable) {
-    throw new AppError(409, 'step_not_reached', `Step "${stepId}" is not on the path this visit has taken yet. Answer the current step first.`);
-  }
-}
 
 async function pinGeneration(ctx: VisitContext, generation: string, transaction: Transaction): Promise<void> {
   // A visit keeps the band-set version it started judging with; only a different generation re-pins.

@@ -108,13 +108,16 @@ export function visitDetail(ctx: VisitContext, traversal: Traversal, extra: { pa
       recommendations: v.recommendations,
       labourMinutes: v.labourMinutes,
       travelMinutes: v.travelMinutes,
+      asLeftState: v.asLeftState,
       returnToService: v.returnToService,
+      lockedOut: v.lockedOut,
       contactName: v.contactName,
       contactEmail: v.contactEmail,
       signedAt: iso(v.signedAt),
       parts: extra.parts.map(partDto),
     },
     reviewComment: v.reviewComment,
+    cancellation: v.cancelledAt ? { at: v.cancelledAt.toISOString(), reason: v.cancelReason ?? '' } : null,
   };
 }
 

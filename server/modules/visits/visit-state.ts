@@ -6,6 +6,7 @@ import { traverseProcedure, type Traversal } from '../../../shared/domain/traver
 import type { MeasureStep } from '../../../shared/schemas/procedure';
 import type { Circuit, ReadingInput } from '../../../shared/schemas/reading';
 import type { Reading } from './visit-work.model';
+import { AppError } from '../../lib/errors';
 import { bandValues, currentReadings, currentResults, type VisitContext } from './visit-context.service';
 
 export function toReadingInput(r: Reading): ReadingInput {
@@ -66,4 +67,17 @@ export function generationSuggestion(ctx: VisitContext, candidates: { generation
   }
   if (Object.keys(values).length === 0) return null;
   return inferGeneration(values, candidates);
+}
+
+/**
+ * Only steps on the path taken, or the step waiting now, take answers and readings: a step behind an
+ * unconfirmed safety gate, or on a branch not taken, is refused with the step that comes first.
+ */
+export function assertReachable(ctx: VisitContext, stepId: string): void {
+  const t = traverse(ctx);
+  if (t.path.some((p) => p.stepId === stepId) || t.current?.id === stepId) return;
+  const step = ctx.definition.steps.find((s) => s.id === stepId);
+  const name = step ? `"${step.title}"` : `Step "${stepId}"`;
+  const first = t.current ? ` "${t.current.title}" comes first${t.current.kind === 'safety_gate' ? ' (a safety step: confirm it before going on)' : ''}.` : '';
+  throw new AppError(409, 'step_not_reached', `${name} is not on the path this visit has taken yet.${first}`);
 }

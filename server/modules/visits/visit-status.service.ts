@@ -1,12 +1,14 @@
 import { DatabaseError, UniqueConstraintError, type Transaction } from 'sequelize';
 import type { SessionUser } from '../../../shared/schemas/session';
-import type { CloseOutInput } from '../../../shared/schemas/visit';
+import { VISIT_STATUS_LABELS } from '../../../shared/format/labels';
+import { CRANK_ANGLE_SETTINGS_REQUIRED, type CancelVisitInput, type CloseOutInput, type VisitStatus } from '../../../shared/schemas/visit';
 import { AppError } from '../../lib/errors';
 import { audit } from '../audit/audit';
 import { visitReference } from '../../../shared/format/visit-reference';
 import { loadAccessibleVisit, loadWritableVisit } from './visit-access.service';
 import { loadVisitContext } from './visit-context.service';
 import { traverse } from './visit-state';
+import { returnToServiceNeeds } from '../../../shared/domain/return-to-service';
 import { PartUsed } from './visit-work.model';
 import { getVisitDetail } from './visits.service';
 import { Visit } from './visits.model';
@@ -45,8 +47,9 @@ const partIdInUse = (id: string) =>
   new AppError(409, 'id_in_use', `The part id ${id} already belongs to a part on another visit; remove that part row and add it again.`, { parts: 'A part id is already in use' });
 
 /**
- * Closes a visit: the procedure must have reached a finding, the post-repair checks must be
- * confirmed and the customer's contact must have signed. The visit then waits for review.
+ * Closes a visit: the procedure must have reached a finding, the press's as-left state must be
+ * given (returned to production after the post-repair checks, or left locked out with the reason
+ * and what it waits for) and the customer's contact must have signed. The visit then waits for review.
  * The signature, the parts and the status change are one transaction on the locked visit row:
  * of two closes at once, the second waits, sees the visit closed and answers 409, leaving nothing.
  */
@@ -65,6 +68,10 @@ export async function closeVisit(user: SessionUser, visitId: number, input: Clos
       if (traversal.findings.length === 0) {
         const at = traversal.current ? ` It is waiting at "${traversal.current.title}".` : '';
         throw new AppError(409, 'no_finding', `Work the procedure through to a finding before closing.${at}`);
+      }
+      // After sensor work the settings taken from the crank angle must be verified before production.
+      if (input.asLeft === 'returned_to_production' && returnToServiceNeeds(traversal.findings[0]).crankAngleSettings && input.returnToService.crankAngleSettingsVerified !== true) {
+        throw new AppError(400, 'invalid_input', 'Some fields need attention.', { 'returnToService.crankAngleSettingsVerified': CRANK_ANGLE_SETTINGS_REQUIRED });
       }
       const stored = await signature.store(user, visitId, transaction);
       const known = await partsAlreadyStored(visitId, input.parts, transaction);
@@ -87,14 +94,16 @@ export async function closeVisit(user: SessionUser, visitId: number, input: Clos
           travelMinutes: input.travelMinutes,
           controlFirmwareLeft: input.controlFirmwareLeft ?? locked.controlFirmwareFound,
           monitorFirmwareLeft: input.monitorFirmwareLeft ?? locked.monitorFirmwareFound,
-          returnToService: input.returnToService,
+          asLeftState: input.asLeft,
+          returnToService: input.asLeft === 'returned_to_production' ? input.returnToService : null,
+          lockedOut: input.asLeft === 'locked_out' ? input.lockedOut : null,
           contactName: input.contactName,
           contactEmail: input.contactEmail,
         },
         { transaction },
       );
       await audit(
-        { visitId, actorId: user.id, action: 'visit_closed', detail: { finding: traversal.findings[0]!.id, causeCategory: input.causeCategory, signatureAttachmentId: stored.id } },
+        { visitId, actorId: user.id, action: 'visit_closed', detail: { finding: traversal.findings[0]!.id, causeCategory: input.causeCategory, asLeft: input.asLeft, signatureAttachmentId: stored.id } },
         transaction,
       );
       // The report e-mail is queued with the close itself: committed together, or not at all.
@@ -145,6 +154,23 @@ export async function reviewVisit(user: SessionUser, visitId: number, decision: 
       { transaction },
     );
     await audit({ visitId, actorId: user.id, action: decision.decision === 'approve' ? 'visit_approved' : 'visit_returned', detail: { comment: decision.comment ?? null } }, transaction);
+  });
+  return getVisitDetail(user, visitId);
+}
+
+/**
+ * Cancels an open visit started by mistake (wrong press, duplicate). The visit and what was recorded
+ * stay for the record, marked cancelled with who, when and why; figures and repeat detection leave it out.
+ */
+export async function cancelVisit(user: SessionUser, visitId: number, input: CancelVisitInput) {
+  await changeStatus(visitId, async (transaction) => {
+    const visit = await loadAccessibleVisit(user, visitId, transaction);
+    if (visit.status !== 'draft' && visit.status !== 'in_progress') {
+      throw new AppError(409, 'visit_not_open', `Visit ${visitReference(visitId)} is ${VISIT_STATUS_LABELS[visit.status as VisitStatus].toLowerCase()}; only an open visit (not yet closed) can be cancelled.`);
+    }
+    const fromStatus = visit.status;
+    await visit.update({ status: 'cancelled', cancelledAt: new Date(), cancelReason: input.reason, cancelledBy: user.id }, { transaction });
+    await audit({ visitId, actorId: user.id, action: 'visit_cancelled', detail: { reason: input.reason, fromStatus } }, transaction);
   });
   return getVisitDetail(user, visitId);
 }

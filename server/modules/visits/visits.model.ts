@@ -1,7 +1,7 @@
 import { DataTypes, type CreationOptional, type ForeignKey, type NonAttribute, type Sequelize } from 'sequelize';
 import { optional, serialId, SerialRow, timestamps, withDefault } from '../../db/columns';
 import type { CauseCategory } from '../../../shared/schemas/reading';
-import type { ReturnToService, VisitStatus } from '../../../shared/schemas/visit';
+import type { AsLeftState, LockedOut, ReturnToService, VisitStatus } from '../../../shared/schemas/visit';
 import type { Press } from '../presses/presses.model';
 import type { User } from '../users/users.model';
 
@@ -22,7 +22,12 @@ export class Visit extends SerialRow<Visit> {
   declare recommendations: CreationOptional<string | null>;
   declare labourMinutes: CreationOptional<number | null>;
   declare travelMinutes: CreationOptional<number | null>;
+  declare asLeftState: CreationOptional<AsLeftState | null>;
   declare returnToService: CreationOptional<ReturnToService | null>;
+  declare lockedOut: CreationOptional<LockedOut | null>;
+  declare cancelledAt: CreationOptional<Date | null>;
+  declare cancelReason: CreationOptional<string | null>;
+  declare cancelledBy: CreationOptional<number | null>;
   declare contactName: CreationOptional<string | null>;
   declare contactEmail: CreationOptional<string | null>;
   declare signedAt: CreationOptional<Date | null>;
@@ -42,8 +47,10 @@ export function initVisit(sequelize: Sequelize): void {
       ...optional(DataTypes.INTEGER, 'procedureId', 'bandSetId', 'firmwareRuleSetId', 'labourMinutes', 'travelMinutes'),
       ...optional(DataTypes.TEXT, 'controlFirmwareFound', 'monitorFirmwareFound', 'controlFirmwareLeft', 'monitorFirmwareLeft'),
       ...optional(DataTypes.TEXT, 'causeCategory', 'actionsTaken', 'recommendations', 'contactName', 'contactEmail', 'reviewComment'),
-      ...optional(DataTypes.JSONB, 'returnToService'),
-      ...optional(DataTypes.DATE, 'signedAt', 'startedAt', 'closedAt'),
+      ...optional(DataTypes.TEXT, 'asLeftState', 'cancelReason'),
+      ...optional(DataTypes.JSONB, 'returnToService', 'lockedOut'),
+      ...optional(DataTypes.INTEGER, 'cancelledBy'),
+      ...optional(DataTypes.DATE, 'signedAt', 'startedAt', 'closedAt', 'cancelledAt'),
       ...timestamps(),
     },
     { sequelize, tableName: 'visits' },

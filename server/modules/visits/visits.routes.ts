@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import { idParamSchema } from '../../../shared/schemas/common';
 import {
+  cancelVisitSchema,
   closeOutSchema,
   readingSaveSchema,
   reviewDecisionSchema,
@@ -13,7 +14,7 @@ import { ANY_ROLE, OFFICE_ROLES, requireRole } from '../../auth/require-role';
 import { valid, validate } from '../../lib/validate';
 import { saveReading } from './readings.service';
 import { answerStep } from './step-answers.service';
-import { closeVisit, reopenVisit, reviewVisit } from './visit-status.service';
+import { cancelVisit, closeVisit, reopenVisit, reviewVisit } from './visit-status.service';
 import { createVisit, getVisitDetail, listVisits } from './visits.service';
 
 export function visitRoutes(): Router {
@@ -45,6 +46,10 @@ export function visitRoutes(): Router {
 
   router.post('/:id/close', anyone, id, validate('body', closeOutSchema), async (req, res) => {
     res.json(await closeVisit(req.user!, visitId(req), valid(req, 'body', closeOutSchema)));
+  });
+
+  router.post('/:id/cancel', anyone, id, validate('body', cancelVisitSchema), async (req, res) => {
+    res.json(await cancelVisit(req.user!, visitId(req), valid(req, 'body', cancelVisitSchema)));
   });
 
   router.post('/:id/reopen', anyone, id, async (req, res) => {

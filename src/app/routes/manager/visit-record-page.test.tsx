@@ -32,6 +32,8 @@ describe("the office's visit record page", () => {
     expect(await screen.findByRole('heading', { level: 1, name: 'Visit V-000042' })).toBeInTheDocument();
     expect(await screen.findByRole('button', { name: 'Approve' })).toBeInTheDocument();
     const record = screen.getByRole('article', { name: 'Record of visit V-000042' });
+    // The record opens with how the press was left.
+    expect(record.firstElementChild).toHaveTextContent(/^Press returned to production$/);
     expect(within(record).getByText('Closed — awaiting review')).toBeInTheDocument();
     expect(within(record).getByText('Time to repair (h:mm)').nextSibling).toHaveTextContent('1:35');
     const readings = within(record).getByRole('table', { name: 'Readings of V-000042 with verdicts and bands' });

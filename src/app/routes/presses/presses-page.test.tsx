@@ -42,7 +42,7 @@ describe('Presses page', () => {
     expect(cards.map((card) => within(card).getByRole('heading').textContent)).toEqual(['PX-101', 'PX-204']);
 
     const second = cards[1]!;
-    expect(within(second).getByText('Invented SP-600 · 1,200 ton')).toBeInTheDocument();
+    expect(within(second).getByText('Invented SP-600 · 1,200 US tons')).toBeInTheDocument();
     expect(within(second).getByText('Example Stampings (invented) · Plant South (invented)')).toBeInTheDocument();
     expect(within(second).getByText('Gen B (invented)')).toBeInTheDocument();
     expect(within(second).getByText('2.9')).toBeInTheDocument();

@@ -42,7 +42,11 @@ describe('the customer report page', () => {
     expect(within(rotor).getByText('Open circuit')).toBeInTheDocument();
     expect(within(rotor).getByText('120 Ω ± 8 % at 20 °C (near edge ± 15 %)')).toBeInTheDocument();
     expect(screen.getByText('1:35')).toBeInTheDocument();
-    expect(screen.getByText('Returned to production after the return-to-service checks')).toBeInTheDocument();
+    // The as-left state is the line right under the title, and the record below does not repeat it as a banner.
+    const title = screen.getByRole('heading', { level: 1 });
+    expect(title.nextElementSibling).toHaveTextContent(/^Press returned to production$/);
+    expect(screen.getAllByText('Press returned to production')).toHaveLength(1);
+    expect(screen.getByText('Press returned to production.')).toBeInTheDocument();
     expect(screen.getByRole('table', { name: 'Parts used' })).toHaveTextContent('DEMO-RS-100');
     expect(screen.getAllByRole('region', { name: 'DANGER safety notice' })[0]).toHaveTextContent('lock out and tag out');
     expect(screen.getByRole('link', { name: 'Download PDF' })).toHaveAttribute('href', `/api/report/${TOKEN}/pdf`);
@@ -55,6 +59,21 @@ describe('the customer report page', () => {
     expect(await screen.findByText(/Acknowledged on .+ by Ines Varga \(invented\)\./)).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Acknowledge receipt' })).not.toBeInTheDocument();
     expect(api.callsTo('POST', `/api/report/${TOKEN}/acknowledge`)[0]!.body).toEqual({ name: 'Ines Varga (invented)' });
+  });
+
+  it('says first that the press was left locked out, with what it waits for and why', async () => {
+    const src = recordSource({ timeZone: 'UTC' });
+    const locked = buildVisitRecord({
+      ...src,
+      visit: { ...src.visit, asLeftState: 'locked_out', returnToService: null, lockedOut: { reason: 'Excitation missing at the board (invented).', waitsFor: 'board' } },
+    });
+    mockApi({ [`GET /api/report/${TOKEN}`]: { status: 200, body: locked } });
+    renderReport();
+    const title = await screen.findByRole('heading', { level: 1, name: 'Service report V-000042' });
+    expect(title.nextElementSibling).toHaveTextContent(
+      'Press left locked out: not fit for production until the processor board is repaired or replacedReason: Excitation missing at the board (invented).',
+    );
+    expect(screen.queryByText(/The fault has cleared on the control/)).not.toBeInTheDocument();
   });
 
   it('acknowledges without a name when the field is cleared', async () => {

@@ -35,7 +35,7 @@ export function ReportPage() {
             </a>
           </div>
           <AcknowledgePanel report={report.data} token={token} />
-          <RecordDocument record={report.data} urls={{ thumb: (id) => reportThumbUrl(token, id), signature: (id) => reportThumbUrl(token, id) }} />
+          <RecordDocument record={report.data} headline={false} urls={{ thumb: (id) => reportThumbUrl(token, id), signature: (id) => reportThumbUrl(token, id) }} />
         </>
       )}
     </main>

@@ -84,12 +84,17 @@ async function fillCloseOut(user: UserEvent) {
   await user.type(screen.getByRole('textbox', { name: 'Serial fitted (optional)' }), 'SN-INV-77');
   await user.type(screen.getByRole('textbox', { name: 'Labour minutes' }), '95');
   await user.type(screen.getByRole('textbox', { name: 'Travel minutes' }), '40');
-  await user.click(screen.getByRole('checkbox', { name: /fault has cleared/ }));
-  await user.click(screen.getByRole('checkbox', { name: /top dead centre/ }));
-  await user.click(screen.getByRole('checkbox', { name: /stopping-time \/ brake-monitor check passed/ }));
+  await tickReturnToService(user);
   await user.type(screen.getByRole('textbox', { name: /Measured stopping time/ }), '180');
   await user.click(screen.getByRole('radio', { name: 'At or beyond its safety distance' }));
+  await user.click(screen.getByRole('radio', { name: 'Neither fitted' }));
   await sign(user);
+}
+
+const RETURN_TO_SERVICE_BOXES = [/fault has cleared/, /top dead centre/, /guard, cover and enclosure door/, /tool and die safety block/, /Everyone was clear/, /single stroke/, /stopping time, measured at about 90°/];
+
+async function tickReturnToService(user: UserEvent) {
+  for (const name of RETURN_TO_SERVICE_BOXES) await user.click(screen.getByRole('checkbox', { name }));
 }
 
 // Filling a whole form by key and tap takes a few seconds on a busy two-core machine.
@@ -155,8 +160,10 @@ describe('Close-out page', { timeout: 20_000 }, () => {
 
     // OSHA 29 CFR 1910.217(c)(3)(iii)(e): Ds = 63 in/s × Ts; for Ts = 0.5 s, 63 × 0.5 = 31.5 in,
     // and 31.5 in × 25.4 mm/in = 800.1 mm (worked by hand).
-    expect(screen.getByText(/Minimum safety distance for a stopping time of 500 ms/)).toHaveTextContent('31.5 in (800.1 mm)');
+    expect(screen.getByText(/Presence-sensing device: minimum safety distance/)).toHaveTextContent('31.5 in (800.1 mm)');
     expect(screen.getByText(/OSHA 29 CFR 1910\.217\(c\)\(3\)\(iii\)\(e\): Ds = 63 in\/s × 0\.5 s/)).toBeInTheDocument();
+    // The time asked for is the 90° downstroke stop, not the brake monitor's top stop.
+    expect(screen.getByRole('textbox', { name: /Measured stopping time/ })).toHaveAccessibleDescription(/stop-time measuring device at about 90° on the downstroke.*Not the brake monitor’s top-stop reading/);
     expect(screen.getByRole('region', { name: 'WARNING safety notice' })).toHaveTextContent(/lockout\/tagout procedure, local electrical codes and licensed practice/);
   });
 
@@ -182,12 +189,107 @@ describe('Close-out page', { timeout: 20_000 }, () => {
       contactName: 'Pat Placeholder',
       contactEmail: 'pat@example.test',
       signaturePng: PNG,
-      returnToService: { faultCleared: true, tdcAgrees: true, stoppingTimeChecked: true, stoppingTimeMs: 180, presenceSensingDistanceOk: 'yes' },
+      asLeft: 'returned_to_production',
+      returnToService: {
+        faultCleared: true,
+        tdcAgrees: true,
+        guardsRefitted: true,
+        toolsRemoved: true,
+        everyoneClear: true,
+        singleStroke: true,
+        stoppingTimeChecked: true,
+        stoppingTimeMs: 180,
+        presenceSensingDistanceOk: 'yes',
+        twoHandDevice: 'not_fitted',
+      },
       parts: [{ partNumber: 'INV-CX-0042', description: 'Circular connector insert (invented)', quantity: 1, serialFitted: 'SN-INV-77' }],
     });
     const body = post!.body as { parts: Array<{ id: string; serialRemoved?: string }> };
     expect(body.parts[0]!.id).toMatch(/^[0-9a-f]{8}-[0-9a-f]{4}-4[0-9a-f]{3}-[89ab][0-9a-f]{3}-[0-9a-f]{12}$/);
     expect(body.parts[0]).not.toHaveProperty('serialRemoved');
+  });
+
+  it('closes with the press left locked out: no return-to-service checks, the reason and what it waits for instead', async () => {
+    const api = closeOutApi();
+    const { user } = renderCloseOut();
+    await formReady();
+    expect(screen.getByRole('radio', { name: /Returned to production/ })).toBeChecked();
+
+    await user.click(screen.getByRole('radio', { name: /Left locked out, tagged not fit for production/ }));
+    expect(screen.queryByRole('checkbox', { name: /fault has cleared/ })).not.toBeInTheDocument();
+    expect(screen.getByRole('heading', { name: 'Left locked out' })).toBeInTheDocument();
+    expect(screen.getAllByRole('region', { name: 'WARNING safety notice' })[0]).toHaveTextContent(/re-apply your lock and tag/);
+
+    await user.click(screen.getByRole('button', { name: 'Close the visit' }));
+    const reason = screen.getByRole('textbox', { name: 'Why the press cannot go back to production' });
+    await waitFor(() => expect(reason).toHaveAttribute('aria-invalid', 'true'));
+    expect(screen.getByRole('group', { name: 'It waits for' })).toHaveAccessibleDescription(/Say what the press waits for/);
+    expect(api.callsTo('POST', '/api/visits/7/close')).toHaveLength(0);
+
+    await user.click(reason);
+    await user.paste('Connector insert cracked; no spare on site.');
+    await user.click(screen.getByRole('radio', { name: 'Something else' }));
+    await user.type(screen.getByRole('textbox', { name: 'What it waits for' }), 'a new connector insert is fitted');
+    await user.click(screen.getByRole('textbox', { name: 'Actions taken' }));
+    await user.paste('Found the insert cracked; left the press locked out and tagged.');
+    await user.type(screen.getByRole('textbox', { name: 'Labour minutes' }), '45');
+    await user.type(screen.getByRole('textbox', { name: 'Travel minutes' }), '0');
+    await sign(user);
+    await user.click(screen.getByRole('button', { name: 'Close the visit' }));
+
+    expect(await screen.findByRole('heading', { name: 'Visit workspace 7' })).toBeInTheDocument();
+    const [post] = api.callsTo('POST', '/api/visits/7/close');
+    expect(closeOutSchema.safeParse(post!.body).success).toBe(true);
+    expect(post!.body).toMatchObject({
+      asLeft: 'locked_out',
+      lockedOut: { reason: 'Connector insert cracked; no spare on site.', waitsFor: 'other', waitsForDetail: 'a new connector insert is fitted' },
+    });
+    // What the schema keeps: the locked-out branch only.
+    const parsed = closeOutSchema.parse(post!.body);
+    expect(parsed).not.toHaveProperty('returnToService');
+  });
+
+  it('starts an escalated board finding as left locked out, waiting for the board', async () => {
+    const base = visitAtFinding();
+    closeOutApi(undefined, visitAtFinding({
+      traversal: { ...base.traversal, findingIds: ['finding-board'] },
+      likelyCauses: { ranked: [{ cause: 'board', score: 3, reasons: ['Excitation out of range (invented).'] }], ruledOut: [] },
+    }));
+    renderCloseOut();
+    await formReady();
+    expect(screen.getByRole('radio', { name: /Left locked out/ })).toBeChecked();
+    expect(screen.getByRole('radio', { name: 'A processor board' })).toBeChecked();
+  });
+
+  it('asks for the crank-angle settings after a sensor finding only', async () => {
+    const base = visitAtFinding();
+    closeOutApi(undefined, visitAtFinding({ traversal: { ...base.traversal, findingIds: ['finding-sensor'] } }));
+    renderCloseOut();
+    await formReady();
+    expect(screen.getByRole('checkbox', { name: /every setting taken from the crank angle is verified: top stop, light-curtain muting only on the upstroke, and any cam outputs/ })).toBeInTheDocument();
+  });
+
+  it('leaves the crank-angle settings check out after a connector finding', async () => {
+    closeOutApi();
+    renderCloseOut();
+    await formReady();
+    expect(screen.queryByRole('checkbox', { name: /every setting taken from the crank angle/ })).not.toBeInTheDocument();
+  });
+
+  it('shows the two-hand trip distance from strokes per minute and engaging points, and asks to confirm it', async () => {
+    const api = closeOutApi();
+    const { user } = renderCloseOut();
+    await formReady();
+    await user.click(screen.getByRole('radio', { name: 'Two-hand trip fitted' }));
+    await user.type(screen.getByRole('textbox', { name: 'Strokes per minute' }), '40');
+    await user.type(screen.getByRole('textbox', { name: 'Engaging points of the clutch' }), '4');
+    // OSHA 29 CFR 1910.217(c)(3)(viii)(c): 40 strokes/min → 1.5 s per revolution; Tm = (1/2 + 1/4) × 1.5 = 1.125 s;
+    // Ds = 63 × 1.125 = 70.875 in → 70.9 in; × 25.4 = 1800.225 mm → 1800.3 mm (worked by hand).
+    expect(screen.getByText(/Two-hand trip: minimum safety distance/)).toHaveTextContent('70.9 in (1800.3 mm)');
+    await user.click(screen.getByRole('button', { name: 'Close the visit' }));
+    const confirm = screen.getByRole('checkbox', { name: /two-hand station sits at or beyond the safety distance shown/ });
+    await waitFor(() => expect(confirm).toHaveAttribute('aria-invalid', 'true'));
+    expect(api.callsTo('POST', '/api/visits/7/close')).toHaveLength(0);
   });
 
   it("shows the server's 409 with the way back to the visit", async () => {

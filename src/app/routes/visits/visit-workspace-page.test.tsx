@@ -137,3 +137,41 @@ describe('Visit workspace: a save that does not reach the server', () => {
     expect(api.callsTo('POST', '/api/visits/42/readings')).toHaveLength(1);
   });
 });
+
+describe('Visit workspace: cancelling a visit started by mistake', () => {
+  it('asks for a reason before cancelling, sends it, then shows the visit as cancelled and kept for the record', async () => {
+    const cancelled: VisitDetail = { ...visitDetail({ status: 'cancelled' }), cancellation: { at: '2026-03-02T09:40:00.000Z', reason: 'Started on the wrong press' } };
+    let current = visitDetail();
+    const api = workspaceApi(current, {
+      'GET /api/visits/42': () => ({ status: 200, body: current }),
+      'POST /api/visits/42/cancel': () => {
+        current = cancelled;
+        return { status: 200, body: cancelled };
+      },
+    });
+    const { user } = renderApp('/visits/42');
+
+    await user.click(await screen.findByRole('button', { name: 'Cancel this visit…' }));
+    const form = screen.getByRole('form', { name: 'Cancel this visit' });
+    await user.click(within(form).getByRole('button', { name: 'Cancel the visit' }));
+    const reason = within(form).getByRole('textbox', { name: 'Why is it cancelled?' });
+    expect(reason).toHaveAttribute('aria-invalid', 'true');
+    expect(reason).toHaveAccessibleDescription(/Say why this visit is cancelled/);
+    expect(api.callsTo('POST', '/api/visits/42/cancel')).toHaveLength(0);
+
+    await user.type(reason, 'Started on the wrong press');
+    await user.click(within(form).getByRole('button', { name: 'Cancel the visit' }));
+
+    expect(await screen.findByText('This visit was cancelled')).toBeInTheDocument();
+    expect(screen.getByText(/Reason: Started on the wrong press\. It is kept for the record and left out of the figures\./)).toBeInTheDocument();
+    expect(api.callsTo('POST', '/api/visits/42/cancel')[0]!.body).toEqual({ reason: 'Started on the wrong press' });
+    expect(screen.queryByRole('button', { name: 'Cancel this visit…' })).not.toBeInTheDocument();
+  });
+
+  it('offers no cancel on a closed visit', async () => {
+    workspaceApi(visitDetail({ status: 'closed' }));
+    renderApp('/visits/42');
+    expect(await screen.findByText('This visit is closed')).toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: 'Cancel this visit…' })).not.toBeInTheDocument();
+  });
+});

@@ -9,6 +9,7 @@ import { Spinner } from '@/components/ui/spinner';
 import { PhotoPanel } from '@/features/photos/components/photo-panel';
 import { useSessionUser } from '@/features/session/hooks/use-session-user';
 import { visitDetailOptions } from '@/api/visits';
+import { CancelVisit } from '@/features/visits/components/cancel-visit';
 import { LikelyCauses } from '@/features/visits/components/likely-causes';
 import { ReturnedVisitNote } from '@/features/visits/components/returned-visit-note';
 import { StepList } from '@/features/visits/components/step-list';
@@ -64,6 +65,11 @@ export function VisitWorkspacePage() {
           It is kept as a record and cannot be changed here.
         </Banner>
       )}
+      {v.status === 'cancelled' && (
+        <Banner className="mb-6" title="This visit was cancelled">
+          {v.cancellation?.reason ? `Reason: ${v.cancellation.reason}. ` : ''}It is kept for the record and left out of the figures.
+        </Banner>
+      )}
       {v.traversal.problems.length > 0 && (
         <Banner tone="error" className="mb-6" title="The procedure has a problem">
           {v.traversal.problems.join(' ')}
@@ -88,6 +94,7 @@ export function VisitWorkspacePage() {
           )}
           <LikelyCauses ranking={v.likelyCauses} />
           <PhotoPanel visitId={v.id} stepId={null} prompt="Photos of the visit as a whole: the press, its nameplate, the display." disabled={!open} />
+          {open && <CancelVisit visitId={v.id} />}
         </div>
       </div>
     </>

@@ -1,3 +1,4 @@
+import { formatCapacity } from '@shared/format/capacity';
 import { useState, type ReactNode } from 'react';
 import type { Customer } from '@shared/schemas/customer';
 import type { Press } from '@shared/schemas/press';
@@ -51,7 +52,7 @@ export function PressDirectory() {
     <Workspace<Press>
       addLabel="Add a press"
       form={(record, done) => <PressForm press={record} onDone={done} />}
-      list={(edit) => <DirectoryList<Press> resource="presses" noun="presses" onEdit={edit} describe={(p) => ({ title: `${p.assetTag} — ${p.model}`, detail: [p.customerName, p.siteName, `${p.tonnage} t`].filter(Boolean).join(' · ') })} />}
+      list={(edit) => <DirectoryList<Press> resource="presses" noun="presses" onEdit={edit} describe={(p) => ({ title: `${p.assetTag} — ${p.model}`, detail: [p.customerName, p.siteName, formatCapacity(p.tonnage, p.capacityUnit)].filter(Boolean).join(' · ') })} />}
     />
   );
 }

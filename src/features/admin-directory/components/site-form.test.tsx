@@ -14,10 +14,10 @@ afterEach(() => {
 // Invented customers and site.
 const stamps = { createdAt: '2026-01-01T00:00:00.000Z', updatedAt: '2026-01-01T00:00:00.000Z' };
 const customers: Customer[] = [
-  { id: 4, name: 'Fictional Stampings', contactName: null, contactEmail: null, contactPhone: null, notes: null, ...stamps },
-  { id: 9, name: 'Madeup Metalforming', contactName: null, contactEmail: null, contactPhone: null, notes: null, ...stamps },
+  { id: 4, name: 'Fictional Stampings', contactName: null, contactEmail: null, contactPhone: null, notes: null, capacityUnit: 'us_ton', ...stamps },
+  { id: 9, name: 'Madeup Metalforming', contactName: null, contactEmail: null, contactPhone: null, notes: null, capacityUnit: 'us_ton', ...stamps },
 ];
-const site: Site = { id: 12, customerId: 4, customerName: 'Fictional Stampings', name: 'North Works', address: null, city: 'Sampleton', ...stamps };
+const site: Site = { id: 12, customerId: 4, customerName: 'Fictional Stampings', name: 'North Works', address: null, city: 'Sampleton', capacityUnit: 'us_ton', ...stamps };
 const page = <T,>(items: T[]) => ({ items, total: items.length, page: 1, pageSize: 100 });
 
 function open() {

@@ -12,14 +12,16 @@ interface RecordFormOptions<R extends DirectoryResource, Fields extends FieldVal
   record: DirectoryRecord<R> | null;
   /** The form's fields: each starts from the record's value of the same name, or empty. */
   names: readonly Path<Fields>[];
+  /** Starting values for a new record where empty is not a choice (e.g. a unit). */
+  fallback?: Partial<Record<Path<Fields>, string>>;
   onDone: () => void;
 }
 
 /** A directory record's form: the shared schema, the record's values, save, and the server's field errors. */
-export function useRecordForm<R extends DirectoryResource, Fields extends FieldValues>({ resource, schema, record, names, onDone }: RecordFormOptions<R, Fields>) {
+export function useRecordForm<R extends DirectoryResource, Fields extends FieldValues>({ resource, schema, record, names, fallback, onDone }: RecordFormOptions<R, Fields>) {
   const save = useSaveRecord(resource);
   const values = record as Record<string, unknown> | null;
-  const defaultValues = Object.fromEntries(names.map((name) => [name, values?.[name] ?? ''])) as DefaultValues<Fields>;
+  const defaultValues = Object.fromEntries(names.map((name) => [name, values?.[name] ?? fallback?.[name] ?? ''])) as DefaultValues<Fields>;
   const form = useForm<Fields, unknown, DirectoryInput<R>>({ resolver: zodResolver(schema), defaultValues });
   const onSubmit = form.handleSubmit(async (input) => {
     try {
@@ -29,5 +31,5 @@ export function useRecordForm<R extends DirectoryResource, Fields extends FieldV
       applyServerErrors(form, error, names);
     }
   });
-  return { save, register: form.register, errors: form.formState.errors, onSubmit: () => void onSubmit() };
+  return { save, register: form.register, control: form.control, errors: form.formState.errors, onSubmit: () => void onSubmit() };
 }

@@ -1,6 +1,7 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { FormProvider, useForm } from 'react-hook-form';
-import { closeOutSchema, type CloseOutInput } from '@shared/schemas/visit';
+import { FormProvider, useForm, useWatch, type Resolver } from 'react-hook-form';
+import { returnToServiceNeeds } from '@shared/domain/return-to-service';
+import { closeOutSchemaFor, type CloseOutInput } from '@shared/schemas/visit';
 import type { VisitDetail } from '@shared/schemas/visit-detail';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
@@ -8,7 +9,8 @@ import { applyServerErrors } from '@/lib/apply-server-errors';
 import { useCloseVisit } from '@/api/visits';
 import { closeOutErrorMap } from '../utils/close-out-error-map';
 import { closeOutDefaults, type CloseOutFields, type CustomerContact } from '../utils/close-out-values';
-import { CauseSection } from './cause-section';
+import { AsLeftSection, LockedOutSection } from './as-left-section';
+import { CauseSection, reachedFinding } from './cause-section';
 import { ContactSection } from './contact-section';
 import { PartsSection } from './parts-section';
 import { ReturnToServiceSection } from './return-to-service-section';
@@ -26,10 +28,14 @@ interface CloseOutFormProps {
 /** Everything the close-out needs, checked against the same schema the server uses. */
 export function CloseOutForm({ visit, contact, onClosed }: CloseOutFormProps) {
   const close = useCloseVisit(visit.id);
+  const finding = reachedFinding(visit);
+  const needs = returnToServiceNeeds(finding);
   const form = useForm<CloseOutFields, unknown, CloseOutInput>({
-    resolver: zodResolver(closeOutSchema, { error: closeOutErrorMap }),
-    defaultValues: closeOutDefaults(visit, contact),
+    // The form holds both as-left branches (see CloseOutFields); the schema keeps the chosen one.
+    resolver: zodResolver(closeOutSchemaFor(needs), { error: closeOutErrorMap }) as unknown as Resolver<CloseOutFields, unknown, CloseOutInput>,
+    defaultValues: closeOutDefaults(visit, contact, finding),
   });
+  const asLeft = useWatch({ control: form.control, name: 'asLeft' });
   const { errors, isSubmitting } = form.formState;
 
   const submit = form.handleSubmit(async (values) => {
@@ -50,7 +56,8 @@ export function CloseOutForm({ visit, contact, onClosed }: CloseOutFormProps) {
         <WorkSection />
         <PartsSection />
         <TimeFirmwareSection />
-        <ReturnToServiceSection />
+        <AsLeftSection />
+        {asLeft === 'locked_out' ? <LockedOutSection /> : <ReturnToServiceSection needs={needs} />}
         <ContactSection />
         <div className="space-y-4">
           {close.isError && !busy && <SubmitProblem error={close.error} visitId={visit.id} onRetry={() => void submit()} />}

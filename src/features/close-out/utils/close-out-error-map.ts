@@ -11,5 +11,7 @@ export const closeOutErrorMap: z.core.$ZodErrorMap = (issue) => {
   if (field === 'travelMinutes') return 'Enter the travel time in whole minutes, e.g. 45 (0 if none)';
   if (field === 'stoppingTimeMs') return 'Enter the stopping time in milliseconds, e.g. 180, or leave it empty';
   if (field === 'quantity') return 'Enter the quantity as a whole number, e.g. 1';
+  if (field === 'strokesPerMinute') return 'Enter the strokes per minute, e.g. 40';
+  if (field === 'engagingPoints') return 'Enter the number of engaging points of the clutch, e.g. 4';
   return 'Enter a number';
 };

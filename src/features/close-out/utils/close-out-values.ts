@@ -1,11 +1,24 @@
 import type { DefaultValues } from 'react-hook-form';
 import type { z } from 'zod';
-import type { closeOutSchema } from '@shared/schemas/visit';
+import type { AsLeftState, closeOutSchema } from '@shared/schemas/visit';
+import type { FindingStep } from '@shared/schemas/procedure';
 import type { VisitDetail } from '@shared/schemas/visit-detail';
 import { formatMinutes } from '@shared/format/minutes';
 
-/** What the form holds while it is typed: text for numbers, unticked boxes, an empty signature. */
-export type CloseOutFields = z.input<typeof closeOutSchema>;
+type FormInput = z.input<typeof closeOutSchema>;
+type ReturnedInput = Extract<FormInput, { asLeft: 'returned_to_production' }>;
+type LockedOutInput = Extract<FormInput, { asLeft: 'locked_out' }>;
+
+/**
+ * What the form holds while it is typed: text for numbers, unticked boxes, an empty signature. Both
+ * as-left branches are held at once (the technician may switch back and forth); the schema keeps only
+ * the chosen one's fields.
+ */
+export type CloseOutFields = Omit<ReturnedInput, 'asLeft' | 'returnToService'> & {
+  asLeft: AsLeftState;
+  returnToService?: Partial<ReturnedInput['returnToService']>;
+  lockedOut?: Partial<LockedOutInput['lockedOut']>;
+};
 export type PartRowFields = NonNullable<CloseOutFields['parts']>[number];
 
 export interface CustomerContact {
@@ -23,9 +36,16 @@ export const newPartRow = (): PartRowFields => ({
   serialFitted: undefined,
 });
 
-/** The engine's best-ranked cause is preselected; firmware as left starts as found; the contact comes from the customer. */
-export function closeOutDefaults(visit: VisitDetail, contact: CustomerContact | undefined): DefaultValues<CloseOutFields> {
+/**
+ * The engine's best-ranked cause is preselected; firmware as left starts as found; the contact comes
+ * from the customer. A finding that escalates (the press cannot be repaired on this visit) starts as
+ * "left locked out", waiting for a board when the finding is the board's.
+ */
+export function closeOutDefaults(visit: VisitDetail, contact: CustomerContact | undefined, finding?: FindingStep): DefaultValues<CloseOutFields> {
+  const escalates = finding?.escalate === true;
   return {
+    asLeft: escalates ? 'locked_out' : 'returned_to_production',
+    lockedOut: escalates && visit.likelyCauses.ranked[0]?.cause === 'board' ? { waitsFor: 'board' } : {},
     causeCategory: visit.likelyCauses.ranked[0]?.cause,
     actionsTaken: '',
     recommendations: undefined,
@@ -34,7 +54,7 @@ export function closeOutDefaults(visit: VisitDetail, contact: CustomerContact | 
     travelMinutes: '',
     controlFirmwareLeft: visit.controlFirmwareFound ?? '',
     monitorFirmwareLeft: visit.monitorFirmwareFound ?? '',
-    returnToService: { stoppingTimeMs: undefined },
+    returnToService: { stoppingTimeMs: undefined, strokesPerMinute: undefined, engagingPoints: undefined },
     contactName: contact?.contactName ?? '',
     contactEmail: contact?.contactEmail ?? '',
     signaturePng: '',

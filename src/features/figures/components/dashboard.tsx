@@ -64,7 +64,7 @@ export function Dashboard({ recordHref, pressHistoryHref }: DashboardProps) {
             onChange={(e) => set('windowDays', e.target.value)}
           />
           <p id={`${id}-window-hint`} className="text-base text-ink-muted">
-            A visit within this many days of the last one on the same press counts as a repeat.
+            A visit starting within this many days of the close of the last one on the same press counts as a repeat (cancelled visits never do).
           </p>
         </div>
       </form>

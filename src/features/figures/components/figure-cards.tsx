@@ -20,13 +20,13 @@ export function FigureCards({ figures }: { figures: ManagerFigures }) {
     <div className="grid gap-4 md:grid-cols-2">
       <Card title="First-time-fix rate" value={ftf.rate === null ? '—' : `${Math.round(ftf.rate * 100)} %`}>
         <p>
-          {ftf.fixedFirstTime} of {ftf.judged} closed visits had no further visit on the press within {period.windowDays} days.
+          {ftf.fixedFirstTime} of {ftf.judged} closed visits that returned the press to production had no further visit on the press within {period.windowDays} days of closing. Presses left locked out are not counted.
         </p>
         {ftf.pending > 0 && <p>{ftf.pending} closed less than {period.windowDays} days ago are not counted yet.</p>}
       </Card>
       <Card title="Mean time to repair" value={formatMinutes(ttr.meanMinutes)}>
         <p>
-          h:mm from starting the visit to the customer&rsquo;s sign-off, over {ttr.visits} closed visit{ttr.visits === 1 ? '' : 's'}; median {formatMinutes(ttr.medianMinutes)}.
+          h:mm from starting the visit to the customer&rsquo;s sign-off, over {ttr.visits} closed visit{ttr.visits === 1 ? '' : 's'} that returned the press to production; median {formatMinutes(ttr.medianMinutes)}.
         </p>
       </Card>
     </div>

@@ -1,3 +1,4 @@
+import { formatCapacity } from '@shared/format/capacity';
 import { Link } from 'react-router-dom';
 import { buttonVariants } from '@/components/ui/button';
 import type { Press } from '@shared/schemas/press';
@@ -25,7 +26,7 @@ export function PressCard({ press }: { press: Press }) {
           {press.assetTag}
         </h2>
         <p className="text-lg text-ink">
-          {press.model} · {press.tonnage.toLocaleString('en-US')} ton
+          {press.model} · {formatCapacity(press.tonnage, press.capacityUnit)}
         </p>
       </header>
       {place && <p className="mt-1 text-lg text-ink-muted">{place}</p>}

@@ -1,32 +1,44 @@
-import { RECORD_SECTIONS as S, RECORD_WORDS as W, stoppingTimeLine } from '@shared/record/record-wording';
+import { lockedOutReasonLine, RECORD_SECTIONS as S, RECORD_WORDS as W, stoppingTimeLine } from '@shared/record/record-wording';
 import type { VisitRecord } from '@shared/schemas/visit-record';
 import { SafetyNotice } from '@/components/ui/safety-notice';
 import { Section } from '@/components/ui/section';
 
-/** How the press was left, with each check confirmed before it went back to production. */
+/** How the press was left: each check confirmed before it went back to production, or why it stays locked out. */
 export function RecordAsLeft({ record }: { record: VisitRecord }) {
   const asLeft = record.asLeft;
+  if (!asLeft) {
+    return (
+      <Section title={S.asLeft}>
+        <p className="text-lg font-semibold">{W.checksNotRecorded}</p>
+      </Section>
+    );
+  }
+  if (asLeft.state === 'locked_out') {
+    return (
+      <Section title={S.asLeft}>
+        <p className="text-lg font-semibold">{asLeft.headline}.</p>
+        <p className="text-lg">{lockedOutReasonLine(asLeft.reason)}</p>
+      </Section>
+    );
+  }
   return (
     <Section title={S.asLeft}>
-      {asLeft ? (
-        <>
-          <p className="text-lg font-semibold">{asLeft.label}</p>
-          <ul className="space-y-1 text-lg">
-            {asLeft.checks.map((c) => (
-              <li key={c.key} className="flex gap-2">
-                <span aria-hidden="true">✓</span>
-                <span>
-                  <span className="sr-only">Checked: </span>
-                  {c.text}
-                </span>
-              </li>
-            ))}
-            {asLeft.stoppingTimeMs !== null && <li>{stoppingTimeLine(asLeft.stoppingTimeMs)}</li>}
-          </ul>
-        </>
-      ) : (
-        <p className="text-lg font-semibold">{W.checksNotRecorded}</p>
-      )}
+      <p className="text-lg font-semibold">{asLeft.headline}.</p>
+      <ul className="space-y-1 text-lg">
+        {asLeft.checks.map((c) => (
+          <li key={c.key} className="flex gap-2">
+            <span aria-hidden="true">✓</span>
+            <span>
+              <span className="sr-only">Checked: </span>
+              {c.text}
+            </span>
+          </li>
+        ))}
+        {asLeft.stoppingTimeMs !== null && <li>{stoppingTimeLine(asLeft.stoppingTimeMs)}</li>}
+        {asLeft.distances.map((d) => (
+          <li key={d}>{d}</li>
+        ))}
+      </ul>
     </Section>
   );
 }

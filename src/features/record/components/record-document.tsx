@@ -1,4 +1,6 @@
 import type { VisitRecord } from '@shared/schemas/visit-record';
+import { AsLeftBanner } from '@/components/ui/as-left-banner';
+import { CancelledBanner } from './record-cancelled';
 import { RecordAsLeft, RecordSafety } from './record-as-left';
 import { RecordFacts } from './record-facts';
 import { RecordPath } from './record-path';
@@ -13,12 +15,16 @@ interface RecordDocumentProps {
   urls: RecordPictureUrls;
   /** The office's record adds the status, the time to repair and the signer's e-mail. */
   office?: boolean;
+  /** The as-left line opens the record unless the page already shows it in its own header. */
+  headline?: boolean;
 }
 
 /** The visit record, read-only, in the same sections and words as the PDF and the e-mail. */
-export function RecordDocument({ record, urls, office = false }: RecordDocumentProps) {
+export function RecordDocument({ record, urls, office = false, headline = true }: RecordDocumentProps) {
   return (
     <article aria-label={`Record of visit ${record.header.reference}`} className="space-y-6">
+      {headline && <AsLeftBanner asLeft={record.asLeft} />}
+      {record.header.cancellation && <CancelledBanner record={record} />}
       <RecordFacts record={record} office={office} />
       <RecordPath record={record} />
       <RecordReadings record={record} />

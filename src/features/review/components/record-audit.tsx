@@ -18,6 +18,7 @@ const ACTIONS: Record<string, string> = {
   visit_returned: 'Returned the visit to the technician',
   visit_reopened: 'Reopened the visit',
   visit_approved: 'Approved the visit',
+  visit_cancelled: 'Cancelled the visit',
 };
 
 const label = (action: string) => ACTIONS[action] ?? action.replace(/_/g, ' ');
@@ -28,7 +29,7 @@ export function RecordAudit({ entries, timeZone }: { entries: AuditTrailEntry[];
     <Section variant="card" title="Audit trail">
       <ol className="space-y-1.5">
         {entries.map((e) => {
-          const comment = typeof e.detail.comment === 'string' ? e.detail.comment : null;
+          const comment = typeof e.detail.comment === 'string' ? e.detail.comment : typeof e.detail.reason === 'string' ? e.detail.reason : null;
           return (
             <li key={e.id} className="text-lg">
               <span className="text-ink-muted">{formatDateTime(e.createdAt, timeZone)}</span> · <span className="font-semibold text-ink">{e.actor?.name ?? 'System'}</span> · {label(e.action)}

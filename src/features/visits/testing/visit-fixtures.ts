@@ -140,13 +140,16 @@ export function visitDetail(options: VisitOptions = {}): VisitDetail {
       recommendations: null,
       labourMinutes: null,
       travelMinutes: null,
+      asLeftState: null,
       returnToService: null,
+      lockedOut: null,
       contactName: null,
       contactEmail: null,
       signedAt: null,
       parts: [],
     },
     reviewComment: options.reviewComment ?? null,
+    cancellation: null,
   };
 }
 

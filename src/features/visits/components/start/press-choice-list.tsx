@@ -1,3 +1,4 @@
+import { formatCapacity } from '@shared/format/capacity';
 import type { Press } from '@shared/schemas/press';
 import { ChoiceButtons } from './pick-list';
 
@@ -9,7 +10,7 @@ export function PressChoiceList({ presses, onChoose, label }: { presses: Press[]
         <>
           <span className="block text-xl font-bold text-ink">{p.assetTag}</span>
           <span className="block text-base text-ink-muted">
-            {p.model} · {p.tonnage.toLocaleString('en-US')} ton{p.customerName ? ` · ${p.customerName}` : ''}
+            {p.model} · {formatCapacity(p.tonnage, p.capacityUnit)}{p.customerName ? ` · ${p.customerName}` : ''}
             {p.siteName ? ` · ${p.siteName}` : ''}
           </span>
         </>

@@ -1,3 +1,4 @@
+import { formatCapacity } from '@shared/format/capacity';
 import { FieldError } from '@/components/ui/field-error';
 import type { Press } from '@shared/schemas/press';
 import { Button } from '@/components/ui/button';
@@ -22,7 +23,7 @@ export function PressPicker({ press, onChange, error, errorId }: PressPickerProp
         <div className="space-y-3 rounded-lg border-2 border-accent bg-accent-soft p-4">
           <p className="text-xl font-bold text-ink">{press.assetTag}</p>
           <p className="text-lg text-ink">
-            {press.model} · {press.tonnage.toLocaleString('en-US')} ton
+            {press.model} · {formatCapacity(press.tonnage, press.capacityUnit)}
           </p>
           <p className="text-lg text-ink-muted">{[press.customerName, press.siteName].filter(Boolean).join(' · ')}</p>
           <p className="text-lg text-ink-muted">Sensor generation on record: {press.sensorGeneration ?? 'not recorded'}</p>
