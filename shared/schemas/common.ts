@@ -26,5 +26,5 @@ export interface Page<T> {
 
 /** The JSON body every error response carries: `message` is written for a person. */
 export interface ApiErrorBody {
-  error: { code: string; message: string; fields?: Record<string, string>; requestId?: string };
+  error: { code: string; message: string; fields?: Record<string, string>; requestId?: string; current?: unknown };
 }

@@ -63,6 +63,7 @@ export function visitAtFinding(overrides: Partial<VisitDetail> = {}): VisitDetai
       parts: [],
     },
     reviewComment: null,
+    version: 3,
     ...overrides,
   };
 }

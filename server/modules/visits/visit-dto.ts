@@ -26,7 +26,7 @@ export function visitSummary(v: Visit): VisitSummary {
   };
 }
 
-const stepResultDto = (r: StepResult): StepResultRecord => ({
+export const stepResultDto = (r: StepResult): StepResultRecord => ({
   id: r.id,
   stepId: r.stepId,
   outcome: r.outcome,
@@ -115,6 +115,7 @@ export function visitDetail(ctx: VisitContext, traversal: Traversal, extra: { pa
       parts: extra.parts.map(partDto),
     },
     reviewComment: v.reviewComment,
+    version: v.version,
   };
 }
 

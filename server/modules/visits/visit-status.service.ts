@@ -9,7 +9,8 @@ import { loadVisitForRead, loadVisitForWrite, visitReference } from './visit-acc
 import { loadVisitContext } from './visit-context';
 import { traverse } from './visit-state';
 import { PartUsed } from './visit-work.model';
-import { getVisitDetail } from './visits.service';
+import { bumpVersion, staleVersion } from './visit-version';
+import { detailById, getVisitDetail } from './visits.service';
 import { Visit } from './visits.model';
 
 /** The status trigger refused a change another request made first (a fallback: the row lock comes first). */
@@ -66,6 +67,20 @@ export async function closeVisit(user: SessionUser, visitId: number, input: Clos
         const at = traversal.current ? ` It is waiting at "${traversal.current.title}".` : '';
         throw new AppError(409, 'no_finding', `Work the procedure through to a finding before closing.${at}`);
       }
+      const finding = traversal.findings[0]!;
+      // The close-out names the finding it reports: one another tab's answer took off the path is refused.
+      if (input.findingId !== undefined && input.findingId !== finding.id) {
+        throw new AppError(
+          409,
+          'finding_not_current',
+          `This close-out reports a finding that no longer applies: the visit now ends at "${finding.title}". Go back to the visit, check the answers, then fill the close-out again.`,
+        );
+      }
+      if (input.version !== undefined && input.version !== locked.version) {
+        throw staleVersion('The visit was changed on another tab or device after you opened this close-out. Compare, then close with what you typed or review the visit first.', {
+          visit: await detailById(visitId, transaction),
+        });
+      }
       const stored = await signature.store(user, visitId, transaction);
       const known = await partsAlreadyStored(visitId, input.parts, transaction);
       for (const part of input.parts) {
@@ -94,9 +109,10 @@ export async function closeVisit(user: SessionUser, visitId: number, input: Clos
         { transaction },
       );
       await audit(
-        { visitId, actorId: user.id, action: 'visit_closed', detail: { finding: traversal.findings[0]!.id, causeCategory: input.causeCategory, signatureAttachmentId: stored.id } },
+        { visitId, actorId: user.id, action: 'visit_closed', detail: { finding: finding.id, causeCategory: input.causeCategory, signatureAttachmentId: stored.id } },
         transaction,
       );
+      await bumpVersion(locked, transaction);
       // The report e-mail is queued with the close itself: committed together, or not at all.
       await enqueueVisitReport(visitId, transaction, user.id);
     });
@@ -121,6 +137,7 @@ export async function reopenVisit(user: SessionUser, visitId: number) {
     const visit = await loadVisitForRead(user, visitId, transaction);
     if (visit.status !== 'returned') throw new AppError(409, 'not_returned', `Visit ${visitReference(visitId)} is ${visit.status}; only a returned visit can be reopened.`);
     await visit.update({ status: 'in_progress', closedAt: null }, { transaction });
+    await bumpVersion(visit, transaction);
     await audit({ visitId, actorId: user.id, action: 'visit_reopened', detail: { reviewComment: visit.reviewComment } }, transaction);
   });
   return getVisitDetail(user, visitId);
@@ -144,6 +161,7 @@ export async function reviewVisit(user: SessionUser, visitId: number, decision: 
       decision.decision === 'approve' ? { status: 'approved' } : { status: 'returned', reviewComment: decision.comment ?? null },
       { transaction },
     );
+    await bumpVersion(visit, transaction);
     await audit({ visitId, actorId: user.id, action: decision.decision === 'approve' ? 'visit_approved' : 'visit_returned', detail: { comment: decision.comment ?? null } }, transaction);
   });
   return getVisitDetail(user, visitId);

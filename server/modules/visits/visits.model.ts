@@ -27,6 +27,8 @@ export class Visit extends Model<InferAttributes<Visit>, InferCreationAttributes
   declare contactEmail: CreationOptional<string | null>;
   declare signedAt: CreationOptional<Date | null>;
   declare reviewComment: CreationOptional<string | null>;
+  /** Bumped with every write to the visit; a write based on an older version is refused (409 stale_version). */
+  declare version: CreationOptional<number>;
   declare startedAt: Date | null;
   declare closedAt: Date | null;
   declare createdAt: CreationOptional<Date>;
@@ -60,6 +62,7 @@ export function initVisit(sequelize: Sequelize): void {
       contactEmail: text(),
       signedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
       reviewComment: text(),
+      version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
       startedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
       closedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
       createdAt: DataTypes.DATE,

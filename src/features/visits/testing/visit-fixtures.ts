@@ -105,6 +105,7 @@ interface VisitOptions {
   bandSet?: BandSetRecord | null;
   generationSuggestion?: VisitDetail['generationSuggestion'];
   reviewComment?: string | null;
+  version?: number;
 }
 
 /** A visit as GET /api/visits/:id sends it, with the path worked out by the real traversal engine. */
@@ -147,6 +148,7 @@ export function visitDetail(options: VisitOptions = {}): VisitDetail {
       parts: [],
     },
     reviewComment: options.reviewComment ?? null,
+    version: options.version ?? 1,
   };
 }
 
