@@ -1,8 +1,9 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import type { Page } from '@shared/schemas/common';
 import type { CloseOutInput, ReadingSaveInput, StepAnswerInput, VisitCreateInput, VisitStatus } from '@shared/schemas/visit';
-import type { ReadingRecord, VisitDetail, VisitSummary } from '@shared/schemas/visit-detail';
+import type { ReadingRecord, StaleVersionCurrent, VisitDetail, VisitSummary } from '@shared/schemas/visit-detail';
 import { apiRequest } from '@/lib/api-client';
+import { isStaleVersion } from '@/lib/api-error';
 
 export interface VisitListFilters {
   mine: boolean;
@@ -88,7 +89,15 @@ export function useReopenVisit() {
 export function useCloseVisit(visitId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: CloseOutInput) => apiRequest<VisitDetail>(`${visitPath(visitId)}/close`, { method: 'POST', body: input }),
+    mutationFn: async (input: CloseOutInput) => {
+      try {
+        return await apiRequest<VisitDetail>(`${visitPath(visitId)}/close`, { method: 'POST', body: input });
+      } catch (error) {
+        // The visit changed elsewhere: show it as it is now; the close-out stays as typed for the person to decide.
+        if (isStaleVersion(error)) queryClient.setQueryData(visitKeys.detail(visitId), (error.current as StaleVersionCurrent).visit);
+        throw error;
+      }
+    },
     onSuccess: (visit) => {
       queryClient.setQueryData(visitKeys.detail(visitId), visit);
       // Lists, tables and photos refresh in the background; the closed visit is on screen at once from the answer.

@@ -204,6 +204,38 @@ describe('Close-out page', { timeout: 20_000 }, () => {
     expect(within(banner).getByRole('link', { name: 'Back to the visit' })).toHaveAttribute('href', '/visits/7');
   });
 
+  it('shows what another device changed beside the close-out, and closes against the visit as it is now when asked', async () => {
+    const changed = visitAtFinding({
+      version: 4,
+      stepResults: [
+        { id: 'answer-from-other-tab', stepId: 'connector-coupling', outcome: 'loose_or_damaged', answer: {}, note: null, confirmedAt: null, createdBy: 1, createdAt: '2026-03-02T09:40:00.000Z', supersededAt: null, supersededReason: null },
+      ],
+    });
+    let posts = 0;
+    const api = closeOutApi(() =>
+      ++posts === 1
+        ? { status: 409, body: { error: { code: 'stale_version', message: 'Changed on another device.', requestId: 't', current: { visit: changed } } } }
+        : { status: 200, body: visitAtFinding({ status: 'closed', version: 5 }) },
+    );
+    const { user, router } = renderCloseOut();
+    await formReady();
+    await fillCloseOut(user);
+    await user.click(screen.getByRole('button', { name: 'Close the visit' }));
+
+    const dialog = await screen.findByRole('dialog', { name: 'The visit changed while you filled this close-out' });
+    expect(within(dialog).getByRole('region', { name: 'Yours' })).toHaveTextContent('Straightened pin 3');
+    expect(within(dialog).getByRole('region', { name: 'Yours' })).toHaveTextContent('1 part, signed by');
+    expect(within(dialog).getByRole('region', { name: 'Saved on the server' })).toHaveTextContent('“Circular connector of the sensor cable” answered again');
+    // Nothing typed is lost while the person decides.
+    expect(screen.getByRole('textbox', { name: 'Part number' })).toHaveValue('INV-CX-0042');
+
+    await user.click(within(dialog).getByRole('button', { name: 'Close with what I typed' }));
+    await waitFor(() => expect(router.state.location.pathname).toBe('/visits/7'));
+    const [first, second] = api.callsTo('POST', '/api/visits/7/close');
+    expect(first?.body).toMatchObject({ version: 3, findingId: 'finding-connector' });
+    expect(second?.body).toMatchObject({ version: 4, findingId: 'finding-connector' });
+  });
+
   it('keeps everything typed after a network failure and retries with the same part id', async () => {
     let tries = 0;
     const api = closeOutApi(() => {

@@ -4,11 +4,15 @@ import { closeOutSchema, type CloseOutInput } from '@shared/schemas/visit';
 import type { VisitDetail } from '@shared/schemas/visit-detail';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
+import { useState } from 'react';
+import { useNavigate } from 'react-router-dom';
 import { applyServerErrors } from '@/lib/apply-server-errors';
+import { isStaleVersion } from '@/lib/api-error';
 import { useCloseVisit } from '@/api/visits';
 import { closeOutErrorMap } from '../utils/close-out-error-map';
 import { closeOutDefaults, type CloseOutFields, type CustomerContact } from '../utils/close-out-values';
 import { CauseSection } from './cause-section';
+import { CloseOutConflict } from './close-out-conflict';
 import { ContactSection } from './contact-section';
 import { PartsSection } from './parts-section';
 import { ReturnToServiceSection } from './return-to-service-section';
@@ -26,6 +30,9 @@ interface CloseOutFormProps {
 /** Everything the close-out needs, checked against the same schema the server uses. */
 export function CloseOutForm({ visit, contact, onClosed }: CloseOutFormProps) {
   const close = useCloseVisit(visit.id);
+  const navigate = useNavigate();
+  // The visit as the close-out was opened, to show what another device changed meanwhile.
+  const [filledAgainst] = useState(visit);
   const form = useForm<CloseOutFields, unknown, CloseOutInput>({
     resolver: zodResolver(closeOutSchema, { error: closeOutErrorMap }),
     defaultValues: closeOutDefaults(visit, contact),
@@ -34,7 +41,8 @@ export function CloseOutForm({ visit, contact, onClosed }: CloseOutFormProps) {
 
   const submit = form.handleSubmit(async (values) => {
     try {
-      onClosed(await close.mutateAsync(values));
+      // The version and finding it was filled against: the server refuses it when either moved on meanwhile.
+      onClosed(await close.mutateAsync({ ...values, version: visit.version, findingId: visit.traversal.findingIds[0] }));
     } catch (error) {
       applyServerErrors(form, error);
     }
@@ -53,7 +61,17 @@ export function CloseOutForm({ visit, contact, onClosed }: CloseOutFormProps) {
         <ReturnToServiceSection />
         <ContactSection />
         <div className="space-y-4">
-          {close.isError && !busy && <SubmitProblem error={close.error} visitId={visit.id} onRetry={() => void submit()} />}
+          {close.isError && !busy && isStaleVersion(close.error) && close.variables && (
+            <CloseOutConflict
+              filledAgainst={filledAgainst}
+              now={visit}
+              sent={close.variables}
+              busy={busy}
+              onCloseAnyway={() => void submit()}
+              onReview={() => void navigate(`/visits/${visit.id}`)}
+            />
+          )}
+          {close.isError && !busy && !isStaleVersion(close.error) && <SubmitProblem error={close.error} visitId={visit.id} onRetry={() => void submit()} />}
           {invalid && !close.isError && (
             <Banner tone="error" title="Some answers need attention">
               Look for the messages marked ✕ above; each says what to do.

@@ -1,17 +1,38 @@
 import { useQueryClient } from '@tanstack/react-query';
-import type { VisitDetail } from '@shared/schemas/visit-detail';
+import type { StaleVersionCurrent, VisitDetail } from '@shared/schemas/visit-detail';
 import { putStepAnswer, visitKeys, type StepAnswerVars } from '@/api/visits';
-import { useResilientSave } from './use-resilient-save';
+import { isStaleVersion } from '@/lib/api-error';
+import { currentResult } from '../lib/step-records';
+import { useResilientSave, type ResilientSave } from './use-resilient-save';
 
-/** Answers one step; the server decides the branching and sends the whole visit back. */
-export function useAnswerStep(visitId: number, onAnswered?: (visit: VisitDetail) => void) {
+/**
+ * Answers one step; the server decides the branching and sends the whole visit back. Each answer
+ * names the answer it replaces as this screen shows it, so one saved meanwhile on another tab or
+ * device comes back as a 409 stale_version (its visit is put on screen at once) instead of being overwritten.
+ */
+export function useAnswerStep(visitId: number, onAnswered?: (visit: VisitDetail) => void): ResilientSave<StepAnswerVars, VisitDetail> {
   const queryClient = useQueryClient();
-  return useResilientSave<StepAnswerVars, VisitDetail>({
-    mutationFn: (vars) => putStepAnswer(visitId, vars),
+  const resilient = useResilientSave<StepAnswerVars, VisitDetail>({
+    mutationFn: async (vars) => {
+      try {
+        return await putStepAnswer(visitId, vars);
+      } catch (error) {
+        if (isStaleVersion(error)) queryClient.setQueryData(visitKeys.detail(visitId), (error.current as StaleVersionCurrent).visit);
+        throw error;
+      }
+    },
     onSuccess: (visit) => {
       queryClient.setQueryData(visitKeys.detail(visitId), visit);
       void queryClient.invalidateQueries({ queryKey: visitKeys.lists() });
       onAnswered?.(visit);
     },
   });
+  return {
+    ...resilient,
+    save: (vars) => {
+      if (vars.body.replaces !== undefined) return resilient.save(vars);
+      const shown = queryClient.getQueryData<VisitDetail>(visitKeys.detail(visitId));
+      resilient.save({ ...vars, body: { ...vars.body, replaces: (shown && currentResult(shown, vars.stepId)?.id) ?? null } });
+    },
+  };
 }

@@ -22,6 +22,8 @@ export interface ResilientSave<TVars, TData> {
   error: unknown;
   variables: TVars | undefined;
   data: TData | undefined;
+  /** Forgets a refused save (the person chose the server's value instead). */
+  reset: () => void;
 }
 
 /**
@@ -89,5 +91,9 @@ export function useResilientSave<TVars, TData>(options: {
     error: mutation.error,
     variables: mutation.variables,
     data: mutation.data,
+    reset: () => {
+      setWaiting(null);
+      mutation.reset();
+    },
   };
 }

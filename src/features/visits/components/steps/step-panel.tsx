@@ -10,6 +10,7 @@ import { FirmwareStepView } from './firmware-step';
 import { MeasureStepView } from './measure-step';
 import { OutcomeStepView } from './outcome-step';
 import { SafetyGateStepView } from './safety-gate-step';
+import { StepConflict } from './step-conflict';
 import { StepHistory } from './step-history';
 
 interface StepPanelProps {
@@ -52,6 +53,7 @@ export function StepPanel({ visit, step, names, onAnswered, renderPhotos }: Step
           keeps its typed readings (and any save still waiting to be retried). */}
       <StepBody key={step.kind === 'measure' ? step.id : `${step.id}-${result?.id ?? 'none'}`} {...{ visit, step, result, answer, editable: editable && !noLongerApplies, names, photos }} />
       <StepHistory visit={visit} step={step} names={names} />
+      <StepConflict step={step} answer={answer} names={names} />
     </section>
   );
 }
