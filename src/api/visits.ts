@@ -4,6 +4,7 @@ import type { CloseOutInput, ReadingSaveInput, StepAnswerInput, VisitCreateInput
 import type { ReadingRecord, StaleVersionCurrent, VisitDetail, VisitSummary } from '@shared/schemas/visit-detail';
 import { apiRequest } from '@/lib/api-client';
 import { isStaleVersion } from '@/lib/api-error';
+import { withSignIn } from '@/lib/session-expiry';
 
 export interface VisitListFilters {
   mine: boolean;
@@ -91,7 +92,8 @@ export function useCloseVisit(visitId: number) {
   return useMutation({
     mutationFn: async (input: CloseOutInput) => {
       try {
-        return await apiRequest<VisitDetail>(`${visitPath(visitId)}/close`, { method: 'POST', body: input });
+        // An ended session holds the close-out until the person signs in again over the page.
+        return await withSignIn(() => apiRequest<VisitDetail>(`${visitPath(visitId)}/close`, { method: 'POST', body: input }));
       } catch (error) {
         // The visit changed elsewhere: show it as it is now; the close-out stays as typed for the person to decide.
         if (isStaleVersion(error)) queryClient.setQueryData(visitKeys.detail(visitId), (error.current as StaleVersionCurrent).visit);

@@ -5,7 +5,7 @@ import { closeOutSchema } from '@shared/schemas/visit';
 import { createAppQueryClient } from '@/app/create-app-query-client';
 import { AppProvider } from '@/app/provider';
 import { visitAtFinding } from '@/testing/close-out-fixtures';
-import { customer } from '@/testing/fixtures';
+import { customer, technician } from '@/testing/fixtures';
 import { apiError, mockApi, type RecordedCall } from '@/testing/mock-api';
 import { CloseOutPage } from './close-out-page';
 
@@ -41,18 +41,19 @@ function renderCloseOut(url = '/visits/7/close') {
     { initialEntries: [url] },
   );
   const user = userEvent.setup();
-  render(
+  const { unmount } = render(
     <AppProvider queryClient={createAppQueryClient()}>
       <RouterProvider router={router} />
     </AppProvider>,
   );
-  return { user, router };
+  return { user, router, unmount };
 }
 
 type Handler = (call: RecordedCall) => { status: number; body?: unknown };
 
 function closeOutApi(close: Handler | { status: number; body?: unknown } = { status: 200, body: visitAtFinding({ status: 'closed' }) }, visit = visitAtFinding()) {
   return mockApi({
+    'GET /api/session': { status: 200, body: { user: technician } },
     'GET /api/visits/7': { status: 200, body: visit },
     'GET /api/customers/100': { status: 200, body: customer() },
     'GET /api/visits/7/attachments': { status: 200, body: { items: [] } },
@@ -234,6 +235,42 @@ describe('Close-out page', { timeout: 20_000 }, () => {
     const [first, second] = api.callsTo('POST', '/api/visits/7/close');
     expect(first?.body).toMatchObject({ version: 3, findingId: 'finding-connector' });
     expect(second?.body).toMatchObject({ version: 4, findingId: 'finding-connector' });
+  });
+
+  it('keeps what is typed on this device, restores it with a notice after leaving the page, and forgets it once the visit closes', async () => {
+    const api = closeOutApi();
+    const first = renderCloseOut();
+    await formReady();
+    await fillCloseOut(first.user);
+    const key = 'crankwise:draft:1:7:close-out';
+    expect(localStorage.getItem(key)).toContain('INV-CX-0042');
+
+    // Reload, Back or a closed tab: the page goes away and comes back.
+    first.unmount();
+    const { user, router } = renderCloseOut();
+    await formReady();
+    expect(screen.getByText(/^Restored what you typed on /)).toBeInTheDocument();
+    expect(screen.getByRole('textbox', { name: 'Actions taken' })).toHaveValue('Straightened pin 3, re-seated the connector, coupling ring hand-tight.');
+    expect(screen.getByRole('textbox', { name: 'Part number' })).toHaveValue('INV-CX-0042');
+    expect(screen.getByRole('textbox', { name: 'Labour minutes' })).toHaveValue('95');
+
+    await user.click(screen.getByRole('button', { name: 'Close the visit' }));
+    await waitFor(() => expect(router.state.location.pathname).toBe('/visits/7'));
+    expect(api.callsTo('POST', '/api/visits/7/close')[0]?.body).toMatchObject({ actionsTaken: expect.stringContaining('Straightened pin 3'), labourMinutes: 95 });
+    expect(localStorage.getItem(key)).toBeNull();
+  });
+
+  it('throws a restored draft away on Discard and starts again from what is saved', async () => {
+    closeOutApi();
+    localStorage.setItem('crankwise:draft:1:7:close-out', JSON.stringify({ savedAt: '2026-03-02T10:15:00.000Z', value: { actionsTaken: 'Typed before the tablet slept (invented).', parts: [], returnToService: {} } }));
+    const { user } = renderCloseOut();
+    await formReady();
+    expect(screen.getByRole('textbox', { name: 'Actions taken' })).toHaveValue('Typed before the tablet slept (invented).');
+
+    await user.click(screen.getByRole('button', { name: 'Discard' }));
+    expect(screen.queryByText(/^Restored what you typed on /)).not.toBeInTheDocument();
+    expect(screen.getByRole('textbox', { name: 'Actions taken' })).toHaveValue('');
+    expect(localStorage.getItem('crankwise:draft:1:7:close-out')).toBeNull();
   });
 
   it('keeps everything typed after a network failure and retries with the same part id', async () => {

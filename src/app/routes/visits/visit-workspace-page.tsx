@@ -15,6 +15,7 @@ import { StepList } from '@/features/visits/components/step-list';
 import { StepPanel } from '@/features/visits/components/steps/step-panel';
 import { VisitStatusMark } from '@/features/visits/components/visit-status-mark';
 import { findStep, isVisitOpen } from '@/features/visits/lib/step-records';
+import { draftKey } from '@/lib/device-drafts';
 import { useDocumentTitle } from '@/lib/use-document-title';
 
 /** The step the workspace shows: the one tapped in the list (kept in the address), else the one waiting now. */
@@ -81,6 +82,7 @@ export function VisitWorkspacePage() {
               step={step}
               names={names}
               onAnswered={onAnswered}
+              readingsDraftKey={draftKey(user.id, v.id, 'readings')}
               renderPhotos={(photoStepId, prompt) => <PhotoPanel visitId={v.id} stepId={photoStepId} prompt={prompt} disabled={!open} />}
             />
           ) : (

@@ -4,7 +4,10 @@ import { closeOutSchema, type CloseOutInput } from '@shared/schemas/visit';
 import type { VisitDetail } from '@shared/schemas/visit-detail';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
+import type { DefaultValues } from 'react-hook-form';
+import { RestoredNotice } from '@/components/ui/restored-notice';
+import { clearDraft, loadDraft, saveDraft } from '@/lib/device-drafts';
 import { useNavigate } from 'react-router-dom';
 import { applyServerErrors } from '@/lib/apply-server-errors';
 import { isStaleVersion } from '@/lib/api-error';
@@ -25,24 +28,47 @@ interface CloseOutFormProps {
   /** The customer's contact on record, to pre-fill who signs; absent when there is none. */
   contact?: CustomerContact;
   onClosed: (visit: VisitDetail) => void;
+  /** Where what is typed is kept on this device until the visit closes (per person and visit). */
+  draftKey?: string;
 }
 
 /** Everything the close-out needs, checked against the same schema the server uses. */
-export function CloseOutForm({ visit, contact, onClosed }: CloseOutFormProps) {
+export function CloseOutForm({ visit, contact, onClosed, draftKey }: CloseOutFormProps) {
   const close = useCloseVisit(visit.id);
   const navigate = useNavigate();
   // The visit as the close-out was opened, to show what another device changed meanwhile.
   const [filledAgainst] = useState(visit);
+  const [restored, setRestored] = useState(() => (draftKey ? loadDraft<DefaultValues<CloseOutFields>>(draftKey) : null));
   const form = useForm<CloseOutFields, unknown, CloseOutInput>({
     resolver: zodResolver(closeOutSchema, { error: closeOutErrorMap }),
-    defaultValues: closeOutDefaults(visit, contact),
+    defaultValues: restored?.value ?? closeOutDefaults(visit, contact),
   });
+
+  // Every change the person makes is kept on the device (a reset by Discard is not a change).
+  const { subscribe } = form;
+  useEffect(() => {
+    if (!draftKey) return;
+    return subscribe({
+      formState: { values: true },
+      callback: ({ values, name }) => {
+        if (name) saveDraft(draftKey, values);
+      },
+    });
+  }, [subscribe, draftKey]);
+
+  const discardDraft = () => {
+    if (draftKey) clearDraft(draftKey);
+    form.reset(closeOutDefaults(visit, contact));
+    setRestored(null);
+  };
   const { errors, isSubmitting } = form.formState;
 
   const submit = form.handleSubmit(async (values) => {
     try {
       // The version and finding it was filled against: the server refuses it when either moved on meanwhile.
-      onClosed(await close.mutateAsync({ ...values, version: visit.version, findingId: visit.traversal.findingIds[0] }));
+      const closed = await close.mutateAsync({ ...values, version: visit.version, findingId: visit.traversal.findingIds[0] });
+      if (draftKey) clearDraft(draftKey);
+      onClosed(closed);
     } catch (error) {
       applyServerErrors(form, error);
     }
@@ -54,6 +80,7 @@ export function CloseOutForm({ visit, contact, onClosed }: CloseOutFormProps) {
   return (
     <FormProvider {...form}>
       <form onSubmit={submit} noValidate aria-label="Close-out" className="space-y-10">
+        {restored && <RestoredNotice savedAt={restored.savedAt} onDiscard={discardDraft} />}
         <CauseSection visit={visit} />
         <WorkSection />
         <PartsSection />

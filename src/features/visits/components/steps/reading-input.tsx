@@ -65,7 +65,8 @@ export function ReadingInput(props: ReadingInputProps) {
     // A conflict with another device's save waits for the person's choice in its dialog (leaving the field must not decide it).
     if (save.isRejected && isStaleVersion(save.error)) return null;
     if (stored && stored.entered === text && conditionsKey(storedConditions(stored)) === conditionsKey(conditions)) return null;
-    const pending = save.isWaitingToRetry ? save.variables : undefined;
+    // The same value already on its way (sending, retrying, or waiting for a sign-in) is not sent twice.
+    const pending = save.inFlight() ?? (save.isWaitingToRetry ? save.variables : undefined);
     if (pending && pending.entered === text && conditionsKey(pending) === conditionsKey(conditions)) return null;
     // A value already saved was answered when it was saved.
     const question = entryQuestion(text, spec.quantity);
