@@ -13,6 +13,7 @@ import { ANY_ROLE, OFFICE_ROLES, requireRole } from '../../auth/require-role';
 import { valid, validate } from '../../lib/validate';
 import { saveReading } from './readings.service';
 import { answerStep } from './step-answers.service';
+import { getReportDelivery } from './report-delivery.service';
 import { closeVisit, reopenVisit, reviewVisit } from './visit-status.service';
 import { createVisit, getVisitDetail, listVisits } from './visits.service';
 
@@ -45,6 +46,10 @@ export function visitRoutes(): Router {
 
   router.post('/:id/close', anyone, id, validate('body', closeOutSchema), async (req, res) => {
     res.json(await closeVisit(req.user!, visitId(req), valid(req, 'body', closeOutSchema)));
+  });
+
+  router.get('/:id/report-delivery', anyone, id, async (req, res) => {
+    res.json({ delivery: await getReportDelivery(req.user!, visitId(req)) });
   });
 
   router.post('/:id/reopen', anyone, id, async (req, res) => {
