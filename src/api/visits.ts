@@ -1,5 +1,6 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import type { Page } from '@shared/schemas/common';
+import type { ReportDelivery } from '@shared/schemas/email';
 import type { CloseOutInput, ReadingSaveInput, StepAnswerInput, VisitCreateInput, VisitStatus } from '@shared/schemas/visit';
 import type { ReadingRecord, StaleVersionCurrent, VisitDetail, VisitSummary } from '@shared/schemas/visit-detail';
 import { apiRequest } from '@/lib/api-client';
@@ -39,6 +40,18 @@ export const visitDetailOptions = (id: number) =>
   queryOptions({
     queryKey: visitKeys.detail(id),
     queryFn: ({ signal }) => apiRequest<VisitDetail>(visitPath(id), { signal }),
+  });
+
+/**
+ * Where the newest report e-mail of a visit went and what the outbox did with it. Asked again every
+ * few seconds while it is still queued or sending, so the technician sees it leave.
+ */
+export const reportDeliveryOptions = (id: number) =>
+  queryOptions({
+    queryKey: [...visitKeys.detail(id), 'report-delivery'] as const,
+    queryFn: ({ signal }) => apiRequest<{ delivery: ReportDelivery | null }>(`${visitPath(id)}/report-delivery`, { signal }),
+    refetchInterval: (query) => (['queued', 'sending'].includes(query.state.data?.delivery?.status ?? '') ? 3000 : false),
+    staleTime: 0,
   });
 
 export interface StepAnswerVars {

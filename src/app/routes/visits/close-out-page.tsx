@@ -59,7 +59,7 @@ export function CloseOutPage() {
             visit={detail}
             contact={contact.data}
             draftKey={user ? draftKey(user.id, detail.id, 'close-out') : undefined}
-            onClosed={(closed) => void navigate(`/visits/${closed.id}`)}
+            onClosed={(closed) => void navigate(`/visits/${closed.id}`, { state: { justClosed: true } })}
           />
         </div>
       )}

@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { useCallback } from 'react';
-import { useParams, useSearchParams } from 'react-router-dom';
+import { useLocation, useParams, useSearchParams } from 'react-router-dom';
 import type { VisitDetail } from '@shared/schemas/visit-detail';
 import { Banner } from '@/components/ui/banner';
 import { LoadError } from '@/components/ui/load-error';
@@ -10,6 +10,7 @@ import { PhotoPanel } from '@/features/photos/components/photo-panel';
 import { useSessionUser } from '@/features/session/hooks/use-session-user';
 import { visitDetailOptions } from '@/api/visits';
 import { LikelyCauses } from '@/features/visits/components/likely-causes';
+import { ReportDeliveryNotice } from '@/features/visits/components/report-delivery-notice';
 import { ReturnedVisitNote } from '@/features/visits/components/returned-visit-note';
 import { StepList } from '@/features/visits/components/step-list';
 import { StepPanel } from '@/features/visits/components/steps/step-panel';
@@ -29,6 +30,8 @@ export function VisitWorkspacePage() {
   const visitId = Number(useParams().id);
   const user = useSessionUser();
   const [params, setParams] = useSearchParams();
+  // Arriving from the close-out: the report notice is the first thing to see.
+  const justClosed = (useLocation().state as { justClosed?: boolean } | null)?.justClosed === true;
   const visit = useQuery({ ...visitDetailOptions(visitId), enabled: Number.isInteger(visitId) && visitId > 0 });
   useDocumentTitle(visit.data ? `Visit ${visit.data.reference}` : 'Visit');
 
@@ -61,9 +64,12 @@ export function VisitWorkspacePage() {
       />
       {v.status === 'returned' && <ReturnedVisitNote visitId={v.id} />}
       {(v.status === 'closed' || v.status === 'approved') && (
-        <Banner className="mb-6" title="This visit is closed">
-          It is kept as a record and cannot be changed here.
-        </Banner>
+        <>
+          <ReportDeliveryNotice visitId={v.id} focusOnShow={justClosed} />
+          <Banner className="mb-6" title="This visit is closed">
+            It is kept as a record and cannot be changed here.
+          </Banner>
+        </>
       )}
       {v.traversal.problems.length > 0 && (
         <Banner tone="error" className="mb-6" title="The procedure has a problem">
