@@ -1,4 +1,4 @@
-import { DatabaseError, UniqueConstraintError, type Transaction } from 'sequelize';
+import { DatabaseError, Op, UniqueConstraintError, type Transaction } from 'sequelize';
 import type { SessionUser } from '../../../shared/schemas/session';
 import type { CloseOutInput } from '../../../shared/schemas/visit';
 import { AppError } from '../../lib/errors';
@@ -33,13 +33,23 @@ async function changeStatus<T>(visitId: number, work: (transaction: Transaction)
   }
 }
 
-/** Parts already stored under the request's ids: a retried close-out's (kept), or another visit's (409). */
-async function partsAlreadyStored(visitId: number, parts: CloseOutInput['parts'], transaction: Transaction): Promise<Set<string>> {
-  if (parts.length === 0) return new Set();
-  const found = await PartUsed.findAll({ where: { id: parts.map((p) => p.id) }, transaction });
-  const elsewhere = found.find((p) => p.visitId !== visitId);
+/**
+ * Makes the visit's parts exactly the close-out's list: a stored part left out of it is removed, a
+ * stored one sent again takes the values sent (a correction edits it), a new one is added. A part id
+ * stored on another visit answers 409. So a corrected report never lists a part twice.
+ */
+async function replaceParts(visitId: number, parts: CloseOutInput['parts'], transaction: Transaction): Promise<void> {
+  const sentIds = parts.map((p) => p.id);
+  const elsewhere = sentIds.length ? await PartUsed.findOne({ where: { id: sentIds, visitId: { [Op.ne]: visitId } }, transaction }) : null;
   if (elsewhere) throw partIdInUse(elsewhere.id);
-  return new Set(found.map((p) => p.id));
+  await PartUsed.destroy({ where: { visitId, ...(sentIds.length ? { id: { [Op.notIn]: sentIds } } : {}) }, transaction });
+  const stored = new Map((await PartUsed.findAll({ where: { visitId }, transaction })).map((p) => [p.id, p]));
+  for (const part of parts) {
+    const values = { partNumber: part.partNumber, description: part.description, quantity: part.quantity, serialRemoved: part.serialRemoved ?? null, serialFitted: part.serialFitted ?? null };
+    const row = stored.get(part.id);
+    if (row) await row.update(values, { transaction });
+    else await PartUsed.create({ id: part.id, visitId, ...values }, { transaction });
+  }
 }
 
 const partIdInUse = (id: string) =>
@@ -82,18 +92,12 @@ export async function closeVisit(user: SessionUser, visitId: number, input: Clos
         });
       }
       const stored = await signature.store(user, visitId, transaction);
-      const known = await partsAlreadyStored(visitId, input.parts, transaction);
-      for (const part of input.parts) {
-        if (known.has(part.id)) continue; // stored by an earlier close-out of this visit
-        await PartUsed.create(
-          { id: part.id, visitId, partNumber: part.partNumber, description: part.description, quantity: part.quantity, serialRemoved: part.serialRemoved ?? null, serialFitted: part.serialFitted ?? null },
-          { transaction },
-        );
-      }
+      await replaceParts(visitId, input.parts, transaction);
       await locked.update(
         {
           status: 'closed',
           closedAt: now,
+          firstClosedAt: locked.firstClosedAt ?? now,
           signedAt: now,
           causeCategory: input.causeCategory,
           actionsTaken: input.actionsTaken,

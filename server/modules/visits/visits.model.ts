@@ -31,6 +31,8 @@ export class Visit extends Model<InferAttributes<Visit>, InferCreationAttributes
   declare version: CreationOptional<number>;
   declare startedAt: Date | null;
   declare closedAt: Date | null;
+  /** The first close: kept through a return and reopen, so time to repair ends there. */
+  declare firstClosedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare press?: NonAttribute<Press>;
@@ -65,6 +67,7 @@ export function initVisit(sequelize: Sequelize): void {
       version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
       startedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
       closedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
+      firstClosedAt: { type: DataTypes.DATE, allowNull: true, defaultValue: null },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

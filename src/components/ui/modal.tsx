@@ -37,8 +37,8 @@ export function Modal({ title, children, onEscape }: ModalProps) {
   };
 
   return (
-    <div className="fixed inset-0 z-50 flex items-center justify-center overflow-y-auto bg-ink/60 p-4" onKeyDown={onKeyDown}>
-      <div ref={boxRef} role="dialog" aria-modal="true" aria-labelledby={titleId} className="my-auto w-full max-w-2xl space-y-5 rounded-xl bg-surface-raised p-6 shadow-xl">
+    <div className="fixed inset-0 z-50 flex items-center justify-center overflow-y-auto bg-ink/70 p-4" onKeyDown={onKeyDown}>
+      <div ref={boxRef} role="dialog" aria-modal="true" aria-labelledby={titleId} className="my-auto w-full max-w-2xl space-y-5 rounded-xl border-4 border-ink bg-surface-raised p-6 shadow-xl">
         <h2 id={titleId} className="text-2xl font-bold text-ink">
           {title}
         </h2>

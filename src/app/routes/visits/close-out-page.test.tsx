@@ -273,6 +273,44 @@ describe('Close-out page', { timeout: 20_000 }, () => {
     expect(localStorage.getItem('crankwise:draft:1:7:close-out')).toBeNull();
   });
 
+  it('reopens a returned visit with its close-out filled in and the manager’s comment pinned, and sends the stored part ids back', async () => {
+    const stored = visitAtFinding({
+      reviewComment: 'Add the serial of the fitted insert (invented comment).',
+      controlFirmwareLeft: '2.10',
+      monitorFirmwareLeft: '3.1.4',
+      closeOut: {
+        causeCategory: 'wiring',
+        actionsTaken: 'Straightened pin 3 (stored close-out).',
+        recommendations: null,
+        labourMinutes: 95,
+        travelMinutes: 40,
+        returnToService: { faultCleared: true, tdcAgrees: true, stoppingTimeChecked: true, stoppingTimeMs: 180, presenceSensingDistanceOk: 'yes' },
+        contactName: 'Ines Invented',
+        contactEmail: 'ines@plant.example',
+        signedAt: '2026-03-02T10:00:00.000Z',
+        parts: [{ id: '6b1f0c3e-2a44-4e0b-9d1c-0f5a8e7b3c21', partNumber: 'INV-CX-0042', description: 'Insert (invented)', quantity: 1, serialRemoved: null, serialFitted: null }],
+      },
+    });
+    const api = closeOutApi(undefined, stored);
+    const { user } = renderCloseOut();
+    await formReady();
+
+    expect(screen.getByRole('region', { name: 'Returned for correction' })).toHaveTextContent('Add the serial of the fitted insert (invented comment).');
+    expect(screen.getByRole('textbox', { name: 'Actions taken' })).toHaveValue('Straightened pin 3 (stored close-out).');
+    expect(screen.getByRole('textbox', { name: 'Part number' })).toHaveValue('INV-CX-0042');
+    expect(screen.getByRole('button', { name: 'Remove part 1' })).toBeInTheDocument();
+    expect(screen.getByRole('textbox', { name: 'Labour minutes' })).toHaveValue('95');
+    expect(screen.getByRole('checkbox', { name: /fault has cleared/ })).toBeChecked();
+    expect(screen.getByRole('textbox', { name: /Measured stopping time/ })).toHaveValue('180');
+
+    await user.type(screen.getByRole('textbox', { name: 'Serial fitted (optional)' }), 'SN-INV-78');
+    await sign(user);
+    await user.click(screen.getByRole('button', { name: 'Close the visit' }));
+    await waitFor(() => expect(api.callsTo('POST', '/api/visits/7/close')).toHaveLength(1));
+    const body = api.callsTo('POST', '/api/visits/7/close')[0]!.body as { parts: Array<{ id: string; serialFitted?: string }> };
+    expect(body.parts).toEqual([expect.objectContaining({ id: '6b1f0c3e-2a44-4e0b-9d1c-0f5a8e7b3c21', serialFitted: 'SN-INV-78' })]);
+  });
+
   it('keeps everything typed after a network failure and retries with the same part id', async () => {
     let tries = 0;
     const api = closeOutApi(() => {

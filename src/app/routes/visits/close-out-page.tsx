@@ -10,6 +10,7 @@ import { CloseOutForm } from '@/features/close-out/components/close-out-form';
 import { CloseOutHeader } from '@/features/close-out/components/close-out-header';
 import { closeOutBlocker } from '@/features/close-out/utils/close-out-blocker';
 import { PhotoPanel } from '@/features/photos/components/photo-panel';
+import { CorrectionNote } from '@/features/visits/components/correction-note';
 import { useSessionQuery } from '@/features/session/hooks/use-session-user';
 import { draftKey } from '@/lib/device-drafts';
 import { useDocumentTitle } from '@/lib/use-document-title';
@@ -50,6 +51,7 @@ export function CloseOutPage() {
   return (
     <>
       <CloseOutHeader visit={detail} />
+      {detail.status === 'in_progress' && detail.reviewComment && <CorrectionNote comment={detail.reviewComment} />}
       {blocker && <CloseOutBlocked blocker={blocker} visitId={detail.id} />}
       {!blocker && waitingForContact && <Spinner label="Loading the customer’s contact…" />}
       {!blocker && !waitingForContact && (

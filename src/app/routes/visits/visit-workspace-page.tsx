@@ -9,6 +9,7 @@ import { Spinner } from '@/components/ui/spinner';
 import { PhotoPanel } from '@/features/photos/components/photo-panel';
 import { useSessionUser } from '@/features/session/hooks/use-session-user';
 import { visitDetailOptions } from '@/api/visits';
+import { CorrectionNote } from '@/features/visits/components/correction-note';
 import { LikelyCauses } from '@/features/visits/components/likely-causes';
 import { ReportDeliveryNotice } from '@/features/visits/components/report-delivery-notice';
 import { ReturnedVisitNote } from '@/features/visits/components/returned-visit-note';
@@ -63,6 +64,7 @@ export function VisitWorkspacePage() {
         actions={<VisitStatusMark status={v.status} />}
       />
       {v.status === 'returned' && <ReturnedVisitNote visitId={v.id} />}
+      {v.status === 'in_progress' && v.reviewComment && <CorrectionNote comment={v.reviewComment} />}
       {(v.status === 'closed' || v.status === 'approved') && (
         <>
           <ReportDeliveryNotice visitId={v.id} focusOnShow={justClosed} />

@@ -23,8 +23,37 @@ export const newPartRow = (): PartRowFields => ({
   serialFitted: undefined,
 });
 
-/** The engine's best-ranked cause is preselected; firmware as left starts as found; the contact comes from the customer. */
+/**
+ * The engine's best-ranked cause is preselected; firmware as left starts as found; the contact comes
+ * from the customer. A visit reopened after a return starts from its stored close-out (parts with
+ * their ids, so the corrected close replaces them); only the signature is asked for again.
+ */
 export function closeOutDefaults(visit: VisitDetail, contact: CustomerContact | undefined): DefaultValues<CloseOutFields> {
+  const stored = visit.closeOut;
+  if (stored.actionsTaken !== null) {
+    const rts = stored.returnToService;
+    return {
+      causeCategory: stored.causeCategory ?? visit.likelyCauses.ranked[0]?.cause,
+      actionsTaken: stored.actionsTaken,
+      recommendations: stored.recommendations ?? undefined,
+      parts: stored.parts.map((p) => ({
+        id: p.id,
+        partNumber: p.partNumber,
+        description: p.description,
+        quantity: String(p.quantity),
+        serialRemoved: p.serialRemoved ?? undefined,
+        serialFitted: p.serialFitted ?? undefined,
+      })),
+      labourMinutes: stored.labourMinutes === null ? '' : String(stored.labourMinutes),
+      travelMinutes: stored.travelMinutes === null ? '' : String(stored.travelMinutes),
+      controlFirmwareLeft: visit.controlFirmwareLeft ?? visit.controlFirmwareFound ?? '',
+      monitorFirmwareLeft: visit.monitorFirmwareLeft ?? visit.monitorFirmwareFound ?? '',
+      returnToService: rts ? { ...rts, stoppingTimeMs: rts.stoppingTimeMs === undefined ? undefined : String(rts.stoppingTimeMs) } : { stoppingTimeMs: undefined },
+      contactName: stored.contactName ?? contact?.contactName ?? '',
+      contactEmail: stored.contactEmail ?? contact?.contactEmail ?? '',
+      signaturePng: '',
+    };
+  }
   return {
     causeCategory: visit.likelyCauses.ranked[0]?.cause,
     actionsTaken: '',

@@ -1,7 +1,8 @@
+import { useQueryClient } from '@tanstack/react-query';
 import type { Step } from '@shared/schemas/procedure';
 import type { StaleVersionCurrent, StepResultRecord, VisitDetail } from '@shared/schemas/visit-detail';
 import { ConflictDialog } from '@/components/ui/conflict-dialog';
-import type { StepAnswerVars } from '@/api/visits';
+import { visitKeys, type StepAnswerVars } from '@/api/visits';
 import { isStaleVersion } from '@/lib/api-error';
 import type { ResilientSave } from '../../hooks/use-resilient-save';
 import { answerInputs, formatWhen, outcomeLabel, type PersonNames } from '../../lib/step-records';
@@ -56,6 +57,7 @@ function storedAnswer(step: Step, result: StepResultRecord | null, names: Person
  * answer (which stays in the history); "Use the server's" leaves the server's answer standing.
  */
 export function StepConflict({ step, answer, names }: StepConflictProps) {
+  const queryClient = useQueryClient();
   if (!answer.isRejected || !isStaleVersion(answer.error) || !answer.variables) return null;
   const sent = answer.variables;
   const current = answer.error.current as StaleVersionCurrent;
@@ -75,7 +77,10 @@ export function StepConflict({ step, answer, names }: StepConflictProps) {
       takeTheirsLabel="Use the server’s"
       busy={answer.isSaving}
       onKeepMine={() => answer.save({ stepId: sent.stepId, body: { ...sent.body, id: crypto.randomUUID(), replaces: onServer?.id ?? null } })}
-      onTakeTheirs={answer.reset}
+      onTakeTheirs={() => {
+        queryClient.setQueryData(visitKeys.detail(current.visit.id), current.visit);
+        answer.reset();
+      }}
     />
   );
 }
