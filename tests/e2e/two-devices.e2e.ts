@@ -11,7 +11,7 @@ import { SCREENSHOT_DIR } from './support/screenshots';
 const { open, baseUrl } = useBrowser();
 
 /** The other tab: the same session's cookies, sent as our own pages send them. */
-const asOtherTab = (page: Page) => ({ headers: { Origin: new URL(baseUrl).origin, 'Content-Type': 'application/json' } });
+const asOtherTab = (_page: Page) => ({ headers: { Origin: new URL(baseUrl).origin, 'Content-Type': 'application/json' } });
 
 /** Every control in the dialog is a touch target of at least 44 × 44 px and is inside the viewport once scrolled to. */
 async function checkDialogTargets(page: Page) {
