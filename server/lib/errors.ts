@@ -11,6 +11,8 @@ export class AppError extends Error {
     readonly code: string,
     message: string,
     readonly fields?: Record<string, string>,
+    /** What the server holds now, sent with a 409 so the person can compare it with theirs. */
+    readonly current?: unknown,
   ) {
     super(message);
     this.name = 'AppError';
@@ -38,7 +40,7 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
   let body: ApiErrorBody['error'];
   if (err instanceof AppError) {
     status = err.status;
-    body = { code: err.code, message: err.message, fields: err.fields };
+    body = { code: err.code, message: err.message, fields: err.fields, ...(err.current !== undefined ? { current: err.current } : {}) };
   } else if (err instanceof ZodError) {
     status = 400;
     body = { code: 'invalid_input', message: 'Some fields need attention.', fields: fieldsFromZod(err) };

@@ -26,7 +26,7 @@ export interface Page<T> {
 
 /** The JSON body every error response carries: `message` is written for a person. */
 export interface ApiErrorBody {
-  error: { code: string; message: string; fields?: Record<string, string>; requestId?: string };
+  error: { code: string; message: string; fields?: Record<string, string>; requestId?: string; current?: unknown };
 }
 
 /** What every stored directory record answers with: its id and two timestamps (ISO 8601). */

@@ -116,4 +116,15 @@ export interface VisitDetail extends VisitSummary {
   reviewComment: string | null;
   /** Set once the visit was cancelled (started by mistake); it is kept for the record. */
   cancellation: { at: string; reason: string } | null;
+  /** Bumped with every write to the visit; a close-out sends the version it was filled against. */
+  version: number;
+}
+
+/** `error.current` of a 409 stale_version: what the server holds now, to show beside what the person sent. */
+export interface StaleVersionCurrent {
+  visit: VisitDetail;
+  /** A step answer's conflict: the step's answer on the server (null: none any more). */
+  stepResult?: StepResultRecord | null;
+  /** A reading's conflict: the reading on the server for that winding and place (null: none any more). */
+  reading?: ReadingRecord | null;
 }

@@ -66,6 +66,11 @@ export const stepAnswerInputSchema = z.object({
     .refine((inputs) => Object.keys(inputs).length <= 20, 'A step takes at most 20 inputs')
     .optional(),
   note: text({ max: 2000 }).optional(),
+  /**
+   * The id of the step's current answer the person saw (null: none yet). When another tab or device
+   * answered the step since, the server answers 409 stale_version with its answer instead of overwriting it.
+   */
+  replaces: z.uuid('Reload the visit: the answer this one replaces is not known').nullable().optional(),
 });
 export type StepAnswerInput = z.infer<typeof stepAnswerInputSchema>;
 
@@ -78,6 +83,8 @@ export const readingSaveSchema = z.object({
   entered: nameText({ min: 1, minMessage: 'Type the meter reading, or OL for an open circuit', max: 40 }),
   /** The technician answered the question asked about this entry (a lone 1, or a winding below 1 Ω). */
   confirmed: z.boolean().optional(),
+  /** The id of the reading this one replaces as the person saw it (null: none yet); 409 stale_version when that changed meanwhile. */
+  replaces: z.uuid('Reload the visit: the reading this one replaces is not known').nullable().optional(),
   windingTemperatureC: z.number().min(-40).max(150).optional(),
   cable: z
     .object({
@@ -181,6 +188,10 @@ const closeOutCommon = z.object({
     .string()
     .regex(/^data:image\/png;base64,[A-Za-z0-9+/=]+$/, 'Ask the customer to sign in the box')
     .max(2_000_000, 'The signature image is too large'),
+  /** The visit's version the close-out was filled against; 409 stale_version when the visit changed since. */
+  version: z.number().int().min(1).optional(),
+  /** The finding the close-out reports; 409 finding_not_current when the path no longer ends there. */
+  findingId: z.string().regex(/^[a-z0-9][a-z0-9_-]{0,62}$/).optional(),
 });
 
 /**

@@ -1,7 +1,9 @@
 import { queryOptions, useMutation, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import { sessionUserSchema, type SessionUser, type SignInInput } from '@shared/schemas/session';
 import { apiRequest } from '@/lib/api-client';
+import { clearUserDrafts } from '@/lib/device-drafts';
 import { isUnauthorized } from '@/lib/api-error';
+import { sessionExpiry } from '@/lib/session-expiry';
 
 export const sessionKeys = {
   all: ['session'] as const,
@@ -21,7 +23,16 @@ export async function fetchSessionUser(signal?: AbortSignal): Promise<SessionUse
 export const sessionOptions = () =>
   queryOptions({
     queryKey: sessionKeys.all,
-    queryFn: ({ signal }) => fetchSessionUser(signal),
+    queryFn: async ({ signal, client }) => {
+      const user = await fetchSessionUser(signal);
+      const shown = client.getQueryData<SessionUser | null>(sessionKeys.all);
+      // Signed out elsewhere while this page was open: keep the page, and ask for the password over it.
+      if (user === null && shown) {
+        sessionExpiry.expire();
+        return shown;
+      }
+      return user;
+    },
     staleTime: 5 * 60_000,
   });
 
@@ -41,7 +52,28 @@ export function useSignIn() {
     meta: { allowUnauthorized: true },
     onSuccess: (user) => {
       forgetOtherQueries(queryClient);
+      sessionExpiry.abandon();
       queryClient.setQueryData(sessionKeys.all, user);
+    },
+  });
+}
+
+/**
+ * Signs the same person in again over the page after their session ended: nothing cached is
+ * dropped (the page and what is typed on it stay), errored queries load again and waiting writes go out.
+ */
+export function useSignInAgain() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async (input: SignInInput) => {
+      const body = await apiRequest<{ user: unknown }>('/api/session', { method: 'POST', body: input });
+      return sessionUserSchema.parse(body.user);
+    },
+    meta: { allowUnauthorized: true },
+    onSuccess: (user) => {
+      queryClient.setQueryData(sessionKeys.all, user);
+      sessionExpiry.renewed();
+      void queryClient.invalidateQueries({ predicate: (query) => query.state.status === 'error' });
     },
   });
 }
@@ -51,6 +83,10 @@ export function useSignOut() {
   return useMutation({
     mutationFn: () => apiRequest<void>('/api/session', { method: 'DELETE' }),
     onSuccess: () => {
+      // What this person typed and did not save leaves the device with them.
+      const user = queryClient.getQueryData<SessionUser | null>(sessionKeys.all);
+      if (user) clearUserDrafts(user.id);
+      sessionExpiry.abandon();
       queryClient.setQueryData(sessionKeys.all, null);
       forgetOtherQueries(queryClient);
     },

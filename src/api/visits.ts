@@ -1,8 +1,11 @@
 import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import type { Page } from '@shared/schemas/common';
+import type { ReportDelivery } from '@shared/schemas/email';
 import type { CancelVisitInput, CloseOutInput, ReadingSaveInput, StepAnswerInput, VisitCreateInput, VisitStatus } from '@shared/schemas/visit';
-import type { ReadingRecord, VisitDetail, VisitSummary } from '@shared/schemas/visit-detail';
+import type { ReadingRecord, StaleVersionCurrent, VisitDetail, VisitSummary } from '@shared/schemas/visit-detail';
 import { apiRequest } from '@/lib/api-client';
+import { isStaleVersion } from '@/lib/api-error';
+import { withSignIn } from '@/lib/session-expiry';
 import { resourceKeys } from './resource';
 
 export interface VisitListFilters {
@@ -32,6 +35,18 @@ export const visitDetailOptions = (id: number) =>
   queryOptions({
     queryKey: visitKeys.detail(id),
     queryFn: ({ signal }) => apiRequest<VisitDetail>(visitPath(id), { signal }),
+  });
+
+/**
+ * Where the newest report e-mail of a visit went and what the outbox did with it. Asked again every
+ * few seconds while it is still queued or sending, so the technician sees it leave.
+ */
+export const reportDeliveryOptions = (id: number) =>
+  queryOptions({
+    queryKey: [...visitKeys.detail(id), 'report-delivery'] as const,
+    queryFn: ({ signal }) => apiRequest<{ delivery: ReportDelivery | null }>(`${visitPath(id)}/report-delivery`, { signal }),
+    refetchInterval: (query) => (['queued', 'sending'].includes(query.state.data?.delivery?.status ?? '') ? 3000 : false),
+    staleTime: 0,
   });
 
 export interface StepAnswerVars {
@@ -92,7 +107,16 @@ export function useCancelVisit(visitId: number) {
 export function useCloseVisit(visitId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: CloseOutInput) => apiRequest<VisitDetail>(`${visitPath(visitId)}/close`, { method: 'POST', body: input }),
+    mutationFn: async (input: CloseOutInput) => {
+      try {
+        // An ended session holds the close-out until the person signs in again over the page.
+        return await withSignIn(() => apiRequest<VisitDetail>(`${visitPath(visitId)}/close`, { method: 'POST', body: input }));
+      } catch (error) {
+        // The visit changed elsewhere: show it as it is now; the close-out stays as typed for the person to decide.
+        if (isStaleVersion(error)) queryClient.setQueryData(visitKeys.detail(visitId), (error.current as StaleVersionCurrent).visit);
+        throw error;
+      }
+    },
     onSuccess: (visit) => {
       queryClient.setQueryData(visitKeys.detail(visitId), visit);
       // Lists, tables and photos refresh in the background; the closed visit is on screen at once from the answer.

@@ -66,6 +66,7 @@ export function visitAtFinding(overrides: Partial<VisitDetail> = {}): VisitDetai
     },
     reviewComment: null,
     cancellation: null,
+    version: 3,
     ...overrides,
   };
 }

@@ -199,3 +199,45 @@ describe('the outbox over SMTP', () => {
     expect(list.body.items[0].lastError).toMatch(/ECONNREFUSED/);
   });
 });
+
+describe("the technician's view of the report e-mail after closing", () => {
+  it('says queued (with the next try), then sent with its time, to the close-out address, with links that open the report and its PDF', async () => {
+    const v = await closeVisit('plant.contact@plant.example');
+    const queued = await tech.get(`/api/visits/${v.id}/report-delivery`);
+    expect(queued.status).toBe(200);
+    expect(queued.body.delivery).toMatchObject({ issueNumber: 1, to: 'plant.contact@plant.example', status: 'queued', sentAt: null, attempts: 0, lastError: null });
+    expect(Date.parse(queued.body.delivery.nextAttemptAt)).not.toBeNaN();
+    expect(queued.body.delivery.timeZone).toEqual(expect.any(String));
+    const { reportPath, pdfPath } = queued.body.delivery as { reportPath: string; pdfPath: string };
+    expect(reportPath).toMatch(/^\/report\/[\w.-]+$/);
+    // The links are the customer's own: they open without a session.
+    const page = await supertest(app()).get(`/api${reportPath}`);
+    expect(page.status).toBe(200);
+    expect(page.body.header.reference).toBe(v.reference);
+    const pdf = await supertest(app()).get(pdfPath);
+    expect(pdf.status).toBe(200);
+    expect(pdf.headers['content-type']).toBe('application/pdf');
+
+    if (!smtp) await startSmtp();
+    await processOutboxOnce();
+    const sent = await tech.get(`/api/visits/${v.id}/report-delivery`);
+    expect(sent.body.delivery).toMatchObject({ status: 'sent', to: 'plant.contact@plant.example', nextAttemptAt: null, attempts: 1 });
+    expect(Date.parse(sent.body.delivery.sentAt)).toBeGreaterThanOrEqual(Date.parse(queued.body.delivery.queuedAt));
+  });
+
+  it("says failed with the mail server's reason when the address is refused", async () => {
+    if (!smtp) await startSmtp();
+    const v = await closeVisit('nobody@plant.example');
+    await processOutboxOnce();
+    const failed = await tech.get(`/api/visits/${v.id}/report-delivery`);
+    expect(failed.body.delivery).toMatchObject({ status: 'failed', to: 'nobody@plant.example', sentAt: null });
+    expect(failed.body.delivery.lastError).toMatch(/550|No such mailbox/);
+  });
+
+  it('answers null before the first close, and 404 to another technician', async () => {
+    const started = await tech.post('/api/visits').send({ pressId, faultDisplayed: 'Resolver fault 12' });
+    expect((await tech.get(`/api/visits/${started.body.id}/report-delivery`)).body).toEqual({ delivery: null });
+    const other = await signedInAgent(app(), (await makeUser('technician')).email);
+    expect((await other.get(`/api/visits/${started.body.id}/report-delivery`)).status).toBe(404);
+  });
+});

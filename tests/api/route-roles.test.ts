@@ -98,6 +98,8 @@ const TABLE: Record<string, Row> = {
   },
   // The visit is not at a finding, so whoever gets through the gate is told so (409).
   'POST /api/visits/:id/close': { call: (f) => ({ path: `/api/visits/${f.visitId}/close`, body: f.closeOut }), expect: [401, 409, 404, 409, 409] },
+  // Not closed yet: whoever gets through hears there is no report (delivery null).
+  'GET /api/visits/:id/report-delivery': { call: (f) => ({ path: `/api/visits/${f.visitId}/report-delivery` }), expect: VISIT_READ },
   // The visit was not returned, so whoever gets through is told so (409).
   'POST /api/visits/:id/reopen': { call: (f) => ({ path: `/api/visits/${f.visitId}/reopen` }), expect: [401, 409, 404, 409, 409] },
   // Each caller gets a visit of its own to cancel (the owner's), so a cancel does not end the shared one.

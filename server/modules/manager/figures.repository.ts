@@ -18,9 +18,10 @@ import { BoundParams } from './bound-params';
 //   a visit closed less than N days before `asOf` is "pending", not a success, unless a repeat has
 //   already come (then it is already a failure). Rate = fixed / judged, so a quiet last month does
 //   not flatter the rate. "No fault found" visits count like any other.
-// - Time to repair: closedAt − startedAt in minutes (wall-clock time from starting the visit at the
-//   press to the customer's sign-off), mean and median over the period's closed visits that returned
-//   the press to production (a press left locked out was not repaired).
+// - Time to repair: first close − startedAt in minutes (wall-clock time from starting the visit at the
+//   press to the customer's first sign-off; a return for correction does not add review time), mean
+//   and median over the period's closed visits that returned the press to production (a press left
+//   locked out was not repaired).
 // - Cause mix: closed visits counted by cause category per calendar month of closedAt.
 // - Repeat visits: a visit that starts within N days (inclusive) of the close of the previous visit
 //   on the same press (its start while it is still open), listed as (previous, repeat) pairs whose
@@ -72,7 +73,7 @@ export async function firstTimeFixCounts(w: FiguresWindow) {
 
 export async function timeToRepair(w: FiguresWindow) {
   const p = new BoundParams();
-  const minutes = 'extract(epoch FROM (v.closed_at - v.started_at)) / 60';
+  const minutes = 'extract(epoch FROM (COALESCE(v.first_closed_at, v.closed_at) - v.started_at)) / 60';
   const sql = `
     SELECT count(*)::int AS visits,
            avg(${minutes})::float8 AS mean_minutes,

@@ -65,5 +65,5 @@ export const SORT_SQL: Record<VisitTableSort, { expr: string; joins: string }> =
   press: { expr: 'p.asset_tag', joins: 'JOIN presses p ON p.id = v.press_id' },
   technician: { expr: 'u.name', joins: 'JOIN users u ON u.id = v.technician_id' },
   cause: { expr: 'v.cause_category', joins: '' },
-  repairMinutes: { expr: '(v.closed_at - v.started_at)', joins: '' },
+  repairMinutes: { expr: '(COALESCE(v.first_closed_at, v.closed_at) - v.started_at)', joins: '' },
 };

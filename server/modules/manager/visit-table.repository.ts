@@ -35,7 +35,7 @@ interface RawRow {
 const selectRows = (extra = '') => `
   SELECT v.id, v.status, v.started_at, v.closed_at, v.fault_displayed, v.cause_category,
          v.labour_minutes, v.travel_minutes,
-         floor(extract(epoch FROM (v.closed_at - v.started_at)) / 60)::int AS repair_minutes,
+         floor(extract(epoch FROM (COALESCE(v.first_closed_at, v.closed_at) - v.started_at)) / 60)::int AS repair_minutes,
          p.id AS press_id, p.asset_tag, p.model AS press_model,
          s.id AS site_id, s.name AS site_name, c.id AS customer_id, c.name AS customer_name,
          u.id AS technician_id, u.name AS technician_name,

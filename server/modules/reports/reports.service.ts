@@ -15,6 +15,7 @@ import { newLinkNonce, readReportLink, signReportLink, verifyReportLink } from '
 import { renderReportPdf, reportFileName, type ReportImages } from './report-pdf';
 import { readVisitRecord } from './visit-record-source';
 import type { OfficeVisitRecord, RecordAcknowledgement, VisitRecord } from '../../../shared/schemas/visit-record';
+import type { ReportDelivery } from '../../../shared/schemas/email';
 
 export interface ReportSettings {
   companyName: string;
@@ -116,6 +117,41 @@ export async function enqueueVisitReport(visitId: number, transaction: Transacti
   );
   await audit({ visitId, actorId, action: 'report_queued', detail: { emailId: email.id, issue: issue.issueNumber, to, replacedUnsent: replaced } }, transaction);
   return { email, issue };
+}
+
+/**
+ * The newest report issue of a visit and what the outbox did with its e-mail, with links to the
+ * customer's page and PDF signed now (never stored) while they open. Null before the first close.
+ * Access to the visit is checked by the caller.
+ */
+export async function reportDelivery(visitId: number): Promise<ReportDelivery | null> {
+  const issue = await ReportIssue.findOne({ where: { visitId }, order: [['issueNumber', 'DESC']] });
+  if (!issue) return null;
+  const email = issue.emailId ? await Email.findByPk(issue.emailId) : null;
+  const visit = await Visit.findByPk(visitId, { attributes: ['id', 'status'] });
+  let token: string | null = null;
+  // The same rule as the customer's link: only a closed or approved visit's newest, unexpired issue opens.
+  if (visit && ['closed', 'approved'].includes(visit.status)) {
+    try {
+      token = await signableIssue(issue.id);
+    } catch (err) {
+      if (!(err instanceof LinkUnavailable)) throw err;
+    }
+  }
+  const status = email?.status ?? 'queued';
+  return {
+    issueNumber: issue.issueNumber,
+    to: email?.toAddress ?? issue.recipient,
+    status,
+    queuedAt: (email?.createdAt ?? issue.createdAt).toISOString(),
+    sentAt: email?.sentAt ? email.sentAt.toISOString() : null,
+    nextAttemptAt: status === 'queued' && email?.nextAttemptAt ? email.nextAttemptAt.toISOString() : null,
+    attempts: email?.attempts ?? 0,
+    lastError: email?.lastError ?? null,
+    reportPath: token ? `/report/${token}` : null,
+    pdfPath: token ? `/api/report/${token}/pdf` : null,
+    timeZone: settings().timeZone,
+  };
 }
 
 /** The same answer for every bad link, so a guess learns nothing about any visit. */

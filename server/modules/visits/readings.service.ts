@@ -11,6 +11,7 @@ import { bandValues, currentReadings, findStep, loadVisitContext, type VisitCont
 import { readingDto } from './visit-dto';
 import { SavedMeanwhile, saveOnce } from './save-once';
 import { assertReachable, toReadingInput } from './visit-state';
+import { bumpVersion, staleVersion } from './visit-version';
 import { Reading } from './visit-work.model';
 import { detailById, getVisitDetail } from './visits.service';
 import { Visit } from './visits.model';
@@ -71,6 +72,13 @@ async function storeReading(user: SessionUser, visitId: number, input: ReadingSa
     if (!spec) throw new AppError(400, 'invalid_input', `Step "${step.id}" has no ${input.quantity} reading of ${input.circuit} at the ${input.position.replace('_', ' ')}.`);
 
     const previous = currentReadings(ctx).find((r) => r.stepId === input.stepId && r.quantity === input.quantity && r.circuit === input.circuit && r.position === input.position);
+    // Another tab or device saved this winding meanwhile: show both values, never overwrite silently.
+    if (input.replaces !== undefined && (previous?.id ?? null) !== input.replaces) {
+      throw staleVersion(`${spec.label} was saved meanwhile, on another tab or device. Compare the two values and choose which one stands.`, {
+        visit: await detailById(visitId, transaction),
+        reading: previous ? readingDto(previous) : null,
+      });
+    }
     if (previous) await previous.update({ supersededAt: new Date() }, { transaction });
     const created = await Reading.create(
       {
@@ -94,6 +102,7 @@ async function storeReading(user: SessionUser, visitId: number, input: ReadingSa
     // rejudge updates `created` in place, so its verdict below is the stored one.
     ctx.readings.push(created);
     await rejudgeVisitReadings(ctx, transaction);
+    await bumpVersion(visit, transaction);
     await audit({ visitId, actorId: user.id, action: previous ? 'reading_replaced' : 'reading_saved', detail: { stepId: input.stepId, circuit: input.circuit, position: input.position, entered: input.entered, verdict: created.verdict } }, transaction);
     return { reading: readingDto(created), visit: await detailById(visitId, transaction) };
   });

@@ -13,6 +13,8 @@ import { assertReachable, missingReadings, stepReadings, toReadingInput } from '
 import { SavedMeanwhile, saveOnce } from './save-once';
 import { StepResult } from './visit-work.model';
 import { rejudgeVisitReadings } from './readings.service';
+import { stepResultDto } from './visit-dto';
+import { bumpVersion, staleVersion } from './visit-version';
 import { detailById, getVisitDetail } from './visits.service';
 import { Visit } from './visits.model';
 
@@ -114,8 +116,15 @@ async function storeAnswer(user: SessionUser, visitId: number, stepId: string, i
     const ctx = await loadVisitContext(visit, transaction);
     const step = findStep(ctx, stepId);
     assertReachable(ctx, stepId);
-    const decided = await decideOutcome(ctx, step, input, transaction);
     const previous = ctx.results.find((r) => r.stepId === stepId && r.supersededAt === null);
+    // Another tab or device answered this step since the person looked: show them, never overwrite.
+    if (input.replaces !== undefined && (previous?.id ?? null) !== input.replaces) {
+      throw staleVersion(`"${step.title}" was answered meanwhile, on another tab or device. Compare the two answers and choose which one stands.`, {
+        visit: await detailById(visitId, transaction),
+        stepResult: previous ? stepResultDto(previous) : null,
+      });
+    }
+    const decided = await decideOutcome(ctx, step, input, transaction);
     if (previous) {
       await previous.update({ supersededAt: new Date(), supersededReason: `Answer changed by ${user.name}` }, { transaction });
     }
@@ -141,6 +150,7 @@ async function storeAnswer(user: SessionUser, visitId: number, stepId: string, i
       },
       transaction,
     );
+    await bumpVersion(visit, transaction);
     return detailById(visitId, transaction);
   });
 }

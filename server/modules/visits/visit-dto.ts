@@ -26,7 +26,7 @@ export function visitSummary(v: Visit): VisitSummary {
   };
 }
 
-const stepResultDto = (r: StepResult): StepResultRecord => ({
+export const stepResultDto = (r: StepResult): StepResultRecord => ({
   id: r.id,
   stepId: r.stepId,
   outcome: r.outcome,
@@ -118,6 +118,7 @@ export function visitDetail(ctx: VisitContext, traversal: Traversal, extra: { pa
     },
     reviewComment: v.reviewComment,
     cancellation: v.cancelledAt ? { at: v.cancelledAt.toISOString(), reason: v.cancelReason ?? '' } : null,
+    version: v.version,
   };
 }
 

@@ -1,4 +1,4 @@
-import { DatabaseError, UniqueConstraintError, type Transaction } from 'sequelize';
+import { DatabaseError, Op, UniqueConstraintError, type Transaction } from 'sequelize';
 import type { SessionUser } from '../../../shared/schemas/session';
 import { VISIT_STATUS_LABELS } from '../../../shared/format/labels';
 import { CRANK_ANGLE_SETTINGS_REQUIRED, type CancelVisitInput, type CloseOutInput, type VisitStatus } from '../../../shared/schemas/visit';
@@ -10,7 +10,8 @@ import { loadVisitContext } from './visit-context.service';
 import { traverse } from './visit-state';
 import { returnToServiceNeeds } from '../../../shared/domain/return-to-service';
 import { PartUsed } from './visit-work.model';
-import { getVisitDetail } from './visits.service';
+import { bumpVersion, staleVersion } from './visit-version';
+import { detailById, getVisitDetail } from './visits.service';
 import { Visit } from './visits.model';
 import { visitClosePorts } from './visit-close-ports';
 
@@ -34,13 +35,23 @@ async function changeStatus<T>(visitId: number, work: (transaction: Transaction)
   }
 }
 
-/** Parts already stored under the request's ids: a retried close-out's (kept), or another visit's (409). */
-async function partsAlreadyStored(visitId: number, parts: CloseOutInput['parts'], transaction: Transaction): Promise<Set<string>> {
-  if (parts.length === 0) return new Set();
-  const found = await PartUsed.findAll({ where: { id: parts.map((p) => p.id) }, transaction });
-  const elsewhere = found.find((p) => p.visitId !== visitId);
+/**
+ * Makes the visit's parts exactly the close-out's list: a stored part left out of it is removed, a
+ * stored one sent again takes the values sent (a correction edits it), a new one is added. A part id
+ * stored on another visit answers 409. So a corrected report never lists a part twice.
+ */
+async function replaceParts(visitId: number, parts: CloseOutInput['parts'], transaction: Transaction): Promise<void> {
+  const sentIds = parts.map((p) => p.id);
+  const elsewhere = sentIds.length ? await PartUsed.findOne({ where: { id: sentIds, visitId: { [Op.ne]: visitId } }, transaction }) : null;
   if (elsewhere) throw partIdInUse(elsewhere.id);
-  return new Set(found.map((p) => p.id));
+  await PartUsed.destroy({ where: { visitId, ...(sentIds.length ? { id: { [Op.notIn]: sentIds } } : {}) }, transaction });
+  const stored = new Map((await PartUsed.findAll({ where: { visitId }, transaction })).map((p) => [p.id, p]));
+  for (const part of parts) {
+    const values = { partNumber: part.partNumber, description: part.description, quantity: part.quantity, serialRemoved: part.serialRemoved ?? null, serialFitted: part.serialFitted ?? null };
+    const row = stored.get(part.id);
+    if (row) await row.update(values, { transaction });
+    else await PartUsed.create({ id: part.id, visitId, ...values }, { transaction });
+  }
 }
 
 const partIdInUse = (id: string) =>
@@ -69,23 +80,31 @@ export async function closeVisit(user: SessionUser, visitId: number, input: Clos
         const at = traversal.current ? ` It is waiting at "${traversal.current.title}".` : '';
         throw new AppError(409, 'no_finding', `Work the procedure through to a finding before closing.${at}`);
       }
-      // After sensor work the settings taken from the crank angle must be verified before production.
-      if (input.asLeft === 'returned_to_production' && returnToServiceNeeds(traversal.findings[0]).crankAngleSettings && input.returnToService.crankAngleSettingsVerified !== true) {
-        throw new AppError(400, 'invalid_input', 'Some fields need attention.', { 'returnToService.crankAngleSettingsVerified': CRANK_ANGLE_SETTINGS_REQUIRED });
-      }
-      const stored = await signature.store(user, visitId, transaction);
-      const known = await partsAlreadyStored(visitId, input.parts, transaction);
-      for (const part of input.parts) {
-        if (known.has(part.id)) continue; // stored by an earlier close-out of this visit
-        await PartUsed.create(
-          { id: part.id, visitId, partNumber: part.partNumber, description: part.description, quantity: part.quantity, serialRemoved: part.serialRemoved ?? null, serialFitted: part.serialFitted ?? null },
-          { transaction },
+      const finding = traversal.findings[0]!;
+      // The close-out names the finding it reports: one another tab's answer took off the path is refused.
+      if (input.findingId !== undefined && input.findingId !== finding.id) {
+        throw new AppError(
+          409,
+          'finding_not_current',
+          `This close-out reports a finding that no longer applies: the visit now ends at "${finding.title}". Go back to the visit, check the answers, then fill the close-out again.`,
         );
       }
+      // After sensor work the settings taken from the crank angle must be verified before production.
+      if (input.asLeft === 'returned_to_production' && returnToServiceNeeds(finding).crankAngleSettings && input.returnToService.crankAngleSettingsVerified !== true) {
+        throw new AppError(400, 'invalid_input', 'Some fields need attention.', { 'returnToService.crankAngleSettingsVerified': CRANK_ANGLE_SETTINGS_REQUIRED });
+      }
+      if (input.version !== undefined && input.version !== locked.version) {
+        throw staleVersion('The visit was changed on another tab or device after you opened this close-out. Compare, then close with what you typed or review the visit first.', {
+          visit: await detailById(visitId, transaction),
+        });
+      }
+      const stored = await signature.store(user, visitId, transaction);
+      await replaceParts(visitId, input.parts, transaction);
       await locked.update(
         {
           status: 'closed',
           closedAt: now,
+          firstClosedAt: locked.firstClosedAt ?? now,
           signedAt: now,
           causeCategory: input.causeCategory,
           actionsTaken: input.actionsTaken,
@@ -103,9 +122,10 @@ export async function closeVisit(user: SessionUser, visitId: number, input: Clos
         { transaction },
       );
       await audit(
-        { visitId, actorId: user.id, action: 'visit_closed', detail: { finding: traversal.findings[0]!.id, causeCategory: input.causeCategory, asLeft: input.asLeft, signatureAttachmentId: stored.id } },
+        { visitId, actorId: user.id, action: 'visit_closed', detail: { finding: finding.id, causeCategory: input.causeCategory, asLeft: input.asLeft, signatureAttachmentId: stored.id } },
         transaction,
       );
+      await bumpVersion(locked, transaction);
       // The report e-mail is queued with the close itself: committed together, or not at all.
       await visitClosePorts().enqueueVisitReport(visitId, transaction, user.id);
     });
@@ -130,6 +150,7 @@ export async function reopenVisit(user: SessionUser, visitId: number) {
     const visit = await loadAccessibleVisit(user, visitId, transaction);
     if (visit.status !== 'returned') throw new AppError(409, 'not_returned', `Visit ${visitReference(visitId)} is ${visit.status}; only a returned visit can be reopened.`);
     await visit.update({ status: 'in_progress', closedAt: null }, { transaction });
+    await bumpVersion(visit, transaction);
     await audit({ visitId, actorId: user.id, action: 'visit_reopened', detail: { reviewComment: visit.reviewComment } }, transaction);
   });
   return getVisitDetail(user, visitId);
@@ -153,6 +174,7 @@ export async function reviewVisit(user: SessionUser, visitId: number, decision: 
       decision.decision === 'approve' ? { status: 'approved' } : { status: 'returned', reviewComment: decision.comment ?? null },
       { transaction },
     );
+    await bumpVersion(visit, transaction);
     await audit({ visitId, actorId: user.id, action: decision.decision === 'approve' ? 'visit_approved' : 'visit_returned', detail: { comment: decision.comment ?? null } }, transaction);
   });
   return getVisitDetail(user, visitId);

@@ -32,8 +32,12 @@ export class Visit extends SerialRow<Visit> {
   declare contactEmail: CreationOptional<string | null>;
   declare signedAt: CreationOptional<Date | null>;
   declare reviewComment: CreationOptional<string | null>;
+  /** Bumped with every write to the visit; a write based on an older version is refused (409 stale_version). */
+  declare version: CreationOptional<number>;
   declare startedAt: Date | null;
   declare closedAt: Date | null;
+  /** The first close: kept through a return and reopen, so time to repair ends there. */
+  declare firstClosedAt: CreationOptional<Date | null>;
   declare press?: NonAttribute<Press>;
   declare technician?: NonAttribute<User>;
 }
@@ -50,7 +54,8 @@ export function initVisit(sequelize: Sequelize): void {
       ...optional(DataTypes.TEXT, 'asLeftState', 'cancelReason'),
       ...optional(DataTypes.JSONB, 'returnToService', 'lockedOut'),
       ...optional(DataTypes.INTEGER, 'cancelledBy'),
-      ...optional(DataTypes.DATE, 'signedAt', 'startedAt', 'closedAt', 'cancelledAt'),
+      ...optional(DataTypes.DATE, 'signedAt', 'startedAt', 'closedAt', 'firstClosedAt', 'cancelledAt'),
+      version: withDefault(DataTypes.INTEGER, 1),
       ...timestamps(),
     },
     { sequelize, tableName: 'visits' },

@@ -14,6 +14,7 @@ import { ANY_ROLE, OFFICE_ROLES, requireRole } from '../../auth/require-role';
 import { valid, validate } from '../../lib/validate';
 import { saveReading } from './readings.service';
 import { answerStep } from './step-answers.service';
+import { getReportDelivery } from './report-delivery.service';
 import { cancelVisit, closeVisit, reopenVisit, reviewVisit } from './visit-status.service';
 import { createVisit, getVisitDetail, listVisits } from './visits.service';
 
@@ -50,6 +51,10 @@ export function visitRoutes(): Router {
 
   router.post('/:id/cancel', anyone, id, validate('body', cancelVisitSchema), async (req, res) => {
     res.json(await cancelVisit(req.user!, visitId(req), valid(req, 'body', cancelVisitSchema)));
+  });
+
+  router.get('/:id/report-delivery', anyone, id, async (req, res) => {
+    res.json({ delivery: await getReportDelivery(req.user!, visitId(req)) });
   });
 
   router.post('/:id/reopen', anyone, id, async (req, res) => {

@@ -1,4 +1,4 @@
-import { screen, waitFor } from '@testing-library/react';
+import { screen, waitFor, within } from '@testing-library/react';
 import { renderApp } from '@/testing/render-app';
 import { apiError, mockApi } from '@/testing/mock-api';
 import { admin, customer, manager, pageOf, press, technician } from '@/testing/fixtures';
@@ -19,12 +19,51 @@ describe('Sign-in guard and role access', () => {
     expect(router.state.location.pathname).toBe('/sign-in');
   });
 
-  it('sends the person to sign in when the session ends while they work', async () => {
+  it('asks for the password over the page when the session ends while they work, and loads the page again after', async () => {
+    let pressCalls = 0;
+    mockApi({
+      'GET /api/session': signedInAs(technician),
+      'GET /api/presses': () => (++pressCalls === 1 ? signedOut : { status: 200, body: pageOf([press()]) }),
+      'POST /api/session': signedInAs(technician),
+    });
+    const { router, user } = renderApp('/presses');
+
+    const dialog = await screen.findByRole('dialog', { name: 'Sign in again to keep working' });
+    expect(router.state.location.pathname).toBe('/presses');
+    await user.type(within(dialog).getByLabelText('Password'), 'correct horse');
+    await user.click(within(dialog).getByRole('button', { name: 'Sign in and continue' }));
+
+    await waitFor(() => expect(screen.queryByRole('dialog')).not.toBeInTheDocument());
+    expect(await screen.findByText(press().assetTag, { exact: false })).toBeInTheDocument();
+    expect(router.state.location.pathname).toBe('/presses');
+  });
+
+  it('goes to the sign-in page when someone else is to sign in instead', async () => {
     mockApi({ 'GET /api/session': signedInAs(technician), 'GET /api/presses': signedOut });
-    const { router } = renderApp('/presses');
+    const { router, user } = renderApp('/presses');
+
+    const dialog = await screen.findByRole('dialog', { name: 'Sign in again to keep working' });
+    await user.click(within(dialog).getByRole('button', { name: 'Sign in as someone else' }));
 
     expect(await screen.findByRole('heading', { name: 'Sign in' })).toBeInTheDocument();
     expect(router.state.location.pathname).toBe('/sign-in');
+  });
+
+  it("clears the signed-out person's unsaved drafts from the device, and only theirs", async () => {
+    mockApi({
+      'GET /api/session': signedInAs(manager),
+      'GET /api/presses': { status: 200, body: pageOf([press()]) },
+      'DELETE /api/session': { status: 204 },
+    });
+    localStorage.setItem(`crankwise:draft:${manager.id}:7:close-out`, JSON.stringify({ savedAt: '2026-03-02T10:00:00.000Z', value: {} }));
+    localStorage.setItem(`crankwise:draft:${manager.id + 100}:7:close-out`, JSON.stringify({ savedAt: '2026-03-02T10:00:00.000Z', value: {} }));
+    const { user } = renderApp('/presses');
+
+    await user.click(await screen.findByRole('button', { name: 'Sign out' }));
+
+    expect(await screen.findByRole('heading', { name: 'Sign in' })).toBeInTheDocument();
+    expect(localStorage.getItem(`crankwise:draft:${manager.id}:7:close-out`)).toBeNull();
+    expect(localStorage.getItem(`crankwise:draft:${manager.id + 100}:7:close-out`)).not.toBeNull();
   });
 
   it('shows a technician a Not allowed page, naming the roles needed, for the customer list', async () => {

@@ -5,7 +5,7 @@ import { closeOutSchema } from '@shared/schemas/visit';
 import { createAppQueryClient } from '@/app/create-app-query-client';
 import { AppProvider } from '@/app/provider';
 import { visitAtFinding } from '@/testing/close-out-fixtures';
-import { customer } from '@/testing/fixtures';
+import { customer, technician } from '@/testing/fixtures';
 import { apiError, mockApi, type RecordedCall } from '@/testing/mock-api';
 import { CloseOutPage } from './close-out-page';
 
@@ -41,18 +41,19 @@ function renderCloseOut(url = '/visits/7/close') {
     { initialEntries: [url] },
   );
   const user = userEvent.setup();
-  render(
+  const { unmount } = render(
     <AppProvider queryClient={createAppQueryClient()}>
       <RouterProvider router={router} />
     </AppProvider>,
   );
-  return { user, router };
+  return { user, router, unmount };
 }
 
 type Handler = (call: RecordedCall) => { status: number; body?: unknown };
 
 function closeOutApi(close: Handler | { status: number; body?: unknown } = { status: 200, body: visitAtFinding({ status: 'closed' }) }, visit = visitAtFinding()) {
   return mockApi({
+    'GET /api/session': { status: 200, body: { user: technician } },
     'GET /api/visits/7': { status: 200, body: visit },
     'GET /api/customers/100': { status: 200, body: customer() },
     'GET /api/visits/7/attachments': { status: 200, body: { items: [] } },
@@ -304,6 +305,114 @@ describe('Close-out page', { timeout: 20_000 }, () => {
     const banner = (await screen.findByText('The visit cannot be closed yet')).closest('[role="alert"]') as HTMLElement;
     expect(banner).toHaveTextContent(message);
     expect(within(banner).getByRole('link', { name: 'Back to the visit' })).toHaveAttribute('href', '/visits/7');
+  });
+
+  it('shows what another device changed beside the close-out, and closes against the visit as it is now when asked', async () => {
+    const changed = visitAtFinding({
+      version: 4,
+      stepResults: [
+        { id: 'answer-from-other-tab', stepId: 'connector-coupling', outcome: 'loose_or_damaged', answer: {}, note: null, confirmedAt: null, createdBy: 1, createdAt: '2026-03-02T09:40:00.000Z', supersededAt: null, supersededReason: null },
+      ],
+    });
+    let posts = 0;
+    const api = closeOutApi(() =>
+      ++posts === 1
+        ? { status: 409, body: { error: { code: 'stale_version', message: 'Changed on another device.', requestId: 't', current: { visit: changed } } } }
+        : { status: 200, body: visitAtFinding({ status: 'closed', version: 5 }) },
+    );
+    const { user, router } = renderCloseOut();
+    await formReady();
+    await fillCloseOut(user);
+    await user.click(screen.getByRole('button', { name: 'Close the visit' }));
+
+    const dialog = await screen.findByRole('dialog', { name: 'The visit changed while you filled this close-out' });
+    expect(within(dialog).getByRole('region', { name: 'Yours' })).toHaveTextContent('Straightened pin 3');
+    expect(within(dialog).getByRole('region', { name: 'Yours' })).toHaveTextContent('1 part, signed by');
+    expect(within(dialog).getByRole('region', { name: 'Saved on the server' })).toHaveTextContent('“Circular connector of the sensor cable” answered again');
+    // Nothing typed is lost while the person decides.
+    expect(screen.getByRole('textbox', { name: 'Part number' })).toHaveValue('INV-CX-0042');
+
+    await user.click(within(dialog).getByRole('button', { name: 'Close with what I typed' }));
+    await waitFor(() => expect(router.state.location.pathname).toBe('/visits/7'));
+    const [first, second] = api.callsTo('POST', '/api/visits/7/close');
+    expect(first?.body).toMatchObject({ version: 3, findingId: 'finding-connector' });
+    expect(second?.body).toMatchObject({ version: 4, findingId: 'finding-connector' });
+  });
+
+  it('keeps what is typed on this device, restores it with a notice after leaving the page, and forgets it once the visit closes', async () => {
+    const api = closeOutApi();
+    const first = renderCloseOut();
+    await formReady();
+    await fillCloseOut(first.user);
+    const key = 'crankwise:draft:1:7:close-out';
+    expect(localStorage.getItem(key)).toContain('INV-CX-0042');
+
+    // Reload, Back or a closed tab: the page goes away and comes back.
+    first.unmount();
+    const { user, router } = renderCloseOut();
+    await formReady();
+    expect(screen.getByText(/^Restored what you typed on /)).toBeInTheDocument();
+    expect(screen.getByRole('textbox', { name: 'Actions taken' })).toHaveValue('Straightened pin 3, re-seated the connector, coupling ring hand-tight.');
+    expect(screen.getByRole('textbox', { name: 'Part number' })).toHaveValue('INV-CX-0042');
+    expect(screen.getByRole('textbox', { name: 'Labour minutes' })).toHaveValue('95');
+
+    await user.click(screen.getByRole('button', { name: 'Close the visit' }));
+    await waitFor(() => expect(router.state.location.pathname).toBe('/visits/7'));
+    expect(api.callsTo('POST', '/api/visits/7/close')[0]?.body).toMatchObject({ actionsTaken: expect.stringContaining('Straightened pin 3'), labourMinutes: 95 });
+    expect(localStorage.getItem(key)).toBeNull();
+  });
+
+  it('throws a restored draft away on Discard and starts again from what is saved', async () => {
+    closeOutApi();
+    localStorage.setItem('crankwise:draft:1:7:close-out', JSON.stringify({ savedAt: '2026-03-02T10:15:00.000Z', value: { actionsTaken: 'Typed before the tablet slept (invented).', parts: [], returnToService: {} } }));
+    const { user } = renderCloseOut();
+    await formReady();
+    expect(screen.getByRole('textbox', { name: 'Actions taken' })).toHaveValue('Typed before the tablet slept (invented).');
+
+    await user.click(screen.getByRole('button', { name: 'Discard' }));
+    expect(screen.queryByText(/^Restored what you typed on /)).not.toBeInTheDocument();
+    expect(screen.getByRole('textbox', { name: 'Actions taken' })).toHaveValue('');
+    expect(localStorage.getItem('crankwise:draft:1:7:close-out')).toBeNull();
+  });
+
+  it('reopens a returned visit with its close-out filled in and the manager’s comment pinned, and sends the stored part ids back', async () => {
+    const stored = visitAtFinding({
+      reviewComment: 'Add the serial of the fitted insert (invented comment).',
+      controlFirmwareLeft: '2.10',
+      monitorFirmwareLeft: '3.1.4',
+      closeOut: {
+        causeCategory: 'wiring',
+        actionsTaken: 'Straightened pin 3 (stored close-out).',
+        recommendations: null,
+        labourMinutes: 95,
+        travelMinutes: 40,
+        asLeftState: 'returned_to_production',
+        lockedOut: null,
+        returnToService: { faultCleared: true, tdcAgrees: true, guardsRefitted: true, toolsRemoved: true, everyoneClear: true, singleStroke: true, stoppingTimeChecked: true, stoppingTimeMs: 180, presenceSensingDistanceOk: 'yes', twoHandDevice: 'not_fitted' },
+        contactName: 'Ines Invented',
+        contactEmail: 'ines@plant.example',
+        signedAt: '2026-03-02T10:00:00.000Z',
+        parts: [{ id: '6b1f0c3e-2a44-4e0b-9d1c-0f5a8e7b3c21', partNumber: 'INV-CX-0042', description: 'Insert (invented)', quantity: 1, serialRemoved: null, serialFitted: null }],
+      },
+    });
+    const api = closeOutApi(undefined, stored);
+    const { user } = renderCloseOut();
+    await formReady();
+
+    expect(screen.getByRole('region', { name: 'Returned for correction' })).toHaveTextContent('Add the serial of the fitted insert (invented comment).');
+    expect(screen.getByRole('textbox', { name: 'Actions taken' })).toHaveValue('Straightened pin 3 (stored close-out).');
+    expect(screen.getByRole('textbox', { name: 'Part number' })).toHaveValue('INV-CX-0042');
+    expect(screen.getByRole('button', { name: 'Remove part 1' })).toBeInTheDocument();
+    expect(screen.getByRole('textbox', { name: 'Labour minutes' })).toHaveValue('95');
+    expect(screen.getByRole('checkbox', { name: /fault has cleared/ })).toBeChecked();
+    expect(screen.getByRole('textbox', { name: /Measured stopping time/ })).toHaveValue('180');
+
+    await user.type(screen.getByRole('textbox', { name: 'Serial fitted (optional)' }), 'SN-INV-78');
+    await sign(user);
+    await user.click(screen.getByRole('button', { name: 'Close the visit' }));
+    await waitFor(() => expect(api.callsTo('POST', '/api/visits/7/close')).toHaveLength(1));
+    const body = api.callsTo('POST', '/api/visits/7/close')[0]!.body as { parts: Array<{ id: string; serialFitted?: string }> };
+    expect(body.parts).toEqual([expect.objectContaining({ id: '6b1f0c3e-2a44-4e0b-9d1c-0f5a8e7b3c21', serialFitted: 'SN-INV-78' })]);
   });
 
   it('keeps everything typed after a network failure and retries with the same part id', async () => {

@@ -92,6 +92,7 @@ describe('Reading input with instant verdict and band gauge', () => {
     expect(within(row).getByText(/the saved verdict above is the one that counts/)).toBeInTheDocument();
     expect(api.callsTo('POST', '/api/visits/42/readings')[0]?.body).toEqual({
       id: expect.stringMatching(/^[0-9a-f-]{36}$/),
+      replaces: null,
       stepId: 'resistance-control-end',
       quantity: 'resistance',
       circuit: 'rotor',

@@ -46,7 +46,7 @@ describe('Visit workspace: safety gate', () => {
     // The server says what comes next: the firmware step.
     expect(await screen.findByRole('heading', { level: 2, name: 'Compare firmware of the control pair' })).toBeInTheDocument();
     const [put] = api.callsTo('PUT', '/api/visits/42/steps/press-at-rest');
-    expect(put?.body).toEqual({ id: expect.stringMatching(/^[0-9a-f-]{36}$/), confirmed: true });
+    expect(put?.body).toEqual({ id: expect.stringMatching(/^[0-9a-f-]{36}$/), confirmed: true, replaces: null });
 
     await user.click(within(stepList()).getByRole('link', { name: /Bring the press to rest/ }));
     expect(await screen.findByText(/Confirmed by Ada Invented \(you\) on Mar 2, 2026/)).toBeInTheDocument();
@@ -75,7 +75,7 @@ describe('Visit workspace: going back to an earlier step', () => {
     await user.click(screen.getByRole('button', { name: 'Ring loose or pins damaged' }));
 
     expect(await screen.findByRole('heading', { level: 2, name: 'Circular connector loose or damaged' })).toBeInTheDocument();
-    expect(api.callsTo('PUT', '/api/visits/42/steps/connector-coupling')[0]?.body).toEqual({ id: expect.any(String), outcome: 'loose_or_damaged' });
+    expect(api.callsTo('PUT', '/api/visits/42/steps/connector-coupling')[0]?.body).toEqual({ id: expect.any(String), outcome: 'loose_or_damaged', replaces: 'result-connector-coupling-secure' });
     const stale = within(stepList()).getByRole('link', { name: /Conductors and terminations/ });
     expect(stale).toHaveTextContent('No longer applies');
     expect(within(stepList()).queryByRole('link', { name: /Winding resistance at the control end/ })).not.toBeInTheDocument();

@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import { useCallback } from 'react';
-import { useParams, useSearchParams } from 'react-router-dom';
+import { useLocation, useParams, useSearchParams } from 'react-router-dom';
 import type { VisitDetail } from '@shared/schemas/visit-detail';
 import { Banner } from '@/components/ui/banner';
 import { LoadError } from '@/components/ui/load-error';
@@ -10,12 +10,15 @@ import { PhotoPanel } from '@/features/photos/components/photo-panel';
 import { useSessionUser } from '@/features/session/hooks/use-session-user';
 import { visitDetailOptions } from '@/api/visits';
 import { CancelVisit } from '@/features/visits/components/cancel-visit';
+import { CorrectionNote } from '@/features/visits/components/correction-note';
 import { LikelyCauses } from '@/features/visits/components/likely-causes';
+import { ReportDeliveryNotice } from '@/features/visits/components/report-delivery-notice';
 import { ReturnedVisitNote } from '@/features/visits/components/returned-visit-note';
 import { StepList } from '@/features/visits/components/step-list';
 import { StepPanel } from '@/features/visits/components/steps/step-panel';
 import { VisitStatusMark } from '@/features/visits/components/visit-status-mark';
 import { findStep, isVisitOpen } from '@/features/visits/lib/step-records';
+import { draftKey } from '@/lib/device-drafts';
 import { useDocumentTitle } from '@/lib/use-document-title';
 
 /** The step the workspace shows: the one tapped in the list (kept in the address), else the one waiting now. */
@@ -29,6 +32,8 @@ export function VisitWorkspacePage() {
   const visitId = Number(useParams().id);
   const user = useSessionUser();
   const [params, setParams] = useSearchParams();
+  // Arriving from the close-out: the report notice is the first thing to see.
+  const justClosed = (useLocation().state as { justClosed?: boolean } | null)?.justClosed === true;
   const visit = useQuery({ ...visitDetailOptions(visitId), enabled: Number.isInteger(visitId) && visitId > 0 });
   useDocumentTitle(visit.data ? `Visit ${visit.data.reference}` : 'Visit');
 
@@ -60,10 +65,14 @@ export function VisitWorkspacePage() {
         actions={<VisitStatusMark status={v.status} />}
       />
       {v.status === 'returned' && <ReturnedVisitNote visitId={v.id} />}
+      {v.status === 'in_progress' && v.reviewComment && <CorrectionNote comment={v.reviewComment} />}
       {(v.status === 'closed' || v.status === 'approved') && (
-        <Banner className="mb-6" title="This visit is closed">
-          It is kept as a record and cannot be changed here.
-        </Banner>
+        <>
+          <ReportDeliveryNotice visitId={v.id} focusOnShow={justClosed} />
+          <Banner className="mb-6" title="This visit is closed">
+            It is kept as a record and cannot be changed here.
+          </Banner>
+        </>
       )}
       {v.status === 'cancelled' && (
         <Banner className="mb-6" title="This visit was cancelled">
@@ -87,6 +96,7 @@ export function VisitWorkspacePage() {
               step={step}
               names={names}
               onAnswered={onAnswered}
+              readingsDraftKey={draftKey(user.id, v.id, 'readings')}
               renderPhotos={(photoStepId, prompt) => <PhotoPanel visitId={v.id} stepId={photoStepId} prompt={prompt} disabled={!open} />}
             />
           ) : (

@@ -39,9 +39,41 @@ export const newPartRow = (): PartRowFields => ({
 /**
  * The engine's best-ranked cause is preselected; firmware as left starts as found; the contact comes
  * from the customer. A finding that escalates (the press cannot be repaired on this visit) starts as
- * "left locked out", waiting for a board when the finding is the board's.
+ * "left locked out", waiting for a board when the finding is the board's. A visit reopened after a
+ * return starts from its stored close-out (parts with their ids, so the corrected close replaces
+ * them; the as-left state and its checks as stored); only the signature is asked for again.
  */
 export function closeOutDefaults(visit: VisitDetail, contact: CustomerContact | undefined, finding?: FindingStep): DefaultValues<CloseOutFields> {
+  const stored = visit.closeOut;
+  if (stored.actionsTaken !== null) {
+    const rts = stored.returnToService;
+    const asText = (n: number | undefined) => (n === undefined ? undefined : String(n));
+    return {
+      asLeft: stored.asLeftState ?? 'returned_to_production',
+      lockedOut: stored.lockedOut ?? {},
+      causeCategory: stored.causeCategory ?? visit.likelyCauses.ranked[0]?.cause,
+      actionsTaken: stored.actionsTaken,
+      recommendations: stored.recommendations ?? undefined,
+      parts: stored.parts.map((p) => ({
+        id: p.id,
+        partNumber: p.partNumber,
+        description: p.description,
+        quantity: String(p.quantity),
+        serialRemoved: p.serialRemoved ?? undefined,
+        serialFitted: p.serialFitted ?? undefined,
+      })),
+      labourMinutes: stored.labourMinutes === null ? '' : String(stored.labourMinutes),
+      travelMinutes: stored.travelMinutes === null ? '' : String(stored.travelMinutes),
+      controlFirmwareLeft: visit.controlFirmwareLeft ?? visit.controlFirmwareFound ?? '',
+      monitorFirmwareLeft: visit.monitorFirmwareLeft ?? visit.monitorFirmwareFound ?? '',
+      returnToService: rts
+        ? { ...rts, stoppingTimeMs: asText(rts.stoppingTimeMs), strokesPerMinute: asText(rts.strokesPerMinute), engagingPoints: asText(rts.engagingPoints) }
+        : { stoppingTimeMs: undefined, strokesPerMinute: undefined, engagingPoints: undefined },
+      contactName: stored.contactName ?? contact?.contactName ?? '',
+      contactEmail: stored.contactEmail ?? contact?.contactEmail ?? '',
+      signaturePng: '',
+    };
+  }
   const escalates = finding?.escalate === true;
   return {
     asLeft: escalates ? 'locked_out' : 'returned_to_production',

@@ -1,6 +1,6 @@
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
-import { errorMessage, isApiError } from '@/lib/api-error';
+import { errorMessage, isApiError, isStaleVersion } from '@/lib/api-error';
 import type { ResilientSave } from '../hooks/use-resilient-save';
 
 interface SaveStatusBannerProps {
@@ -30,7 +30,8 @@ export function SaveStatusBanner({ save, what, className }: SaveStatusBannerProp
       </Banner>
     );
   }
-  if (save.isRejected) {
+  // A conflict with another device's save is settled in its own dialog.
+  if (save.isRejected && !isStaleVersion(save.error)) {
     return (
       <Banner tone="error" role="alert" className={className} title={`Not saved: ${what} needs attention`}>
         {errorMessage(save.error)}

@@ -1,6 +1,7 @@
 import { onlineManager, useMutation } from '@tanstack/react-query';
-import { useCallback, useEffect, useState } from 'react';
+import { useCallback, useEffect, useRef, useState } from 'react';
 import { isApiError } from '@/lib/api-error';
+import { withSignIn } from '@/lib/session-expiry';
 
 /** The request never reached the server (or its answer never came back): worth sending again. */
 export const isNetworkFailure = (error: unknown) => isApiError(error) && (error.status === 0 || error.status >= 500);
@@ -22,6 +23,13 @@ export interface ResilientSave<TVars, TData> {
   error: unknown;
   variables: TVars | undefined;
   data: TData | undefined;
+  /**
+   * The save on its way now (sending, or waiting for a sign-in), read in event handlers: it is set
+   * when the save starts, before the screen shows it, so a blur right after cannot send it twice.
+   */
+  inFlight: () => TVars | undefined;
+  /** Forgets a refused save (the person chose the server's value instead). */
+  reset: () => void;
 }
 
 /**
@@ -36,16 +44,23 @@ export function useResilientSave<TVars, TData>(options: {
 }): ResilientSave<TVars, TData> {
   // Retries are scheduled here rather than by TanStack's own `retry`, so that Retry can send at
   // once without a second request racing a sleeping one.
-  const mutation = useMutation({ mutationFn: options.mutationFn, onSuccess: options.onSuccess, retry: false });
+  // A 401 holds the save until the person has signed in again over the page, then sends it as it was.
+  const mutation = useMutation({ mutationFn: (vars: TVars) => withSignIn(() => options.mutationFn(vars)), onSuccess: options.onSuccess, retry: false });
   const { mutate, isPending } = mutation;
   const [waiting, setWaiting] = useState<{ vars: TVars; attempt: number } | null>(null);
+  const inFlight = useRef<TVars | undefined>(undefined);
 
   const send = useCallback(
-    (vars: TVars, attempt: number) =>
+    (vars: TVars, attempt: number) => {
+      inFlight.current = vars;
       mutate(vars, {
         onSuccess: () => setWaiting(null),
         onError: (error) => setWaiting(isNetworkFailure(error) ? { vars, attempt } : null),
-      }),
+        onSettled: () => {
+          if (inFlight.current === vars) inFlight.current = undefined;
+        },
+      });
+    },
     [mutate],
   );
 
@@ -89,5 +104,10 @@ export function useResilientSave<TVars, TData>(options: {
     error: mutation.error,
     variables: mutation.variables,
     data: mutation.data,
+    inFlight: () => inFlight.current,
+    reset: () => {
+      setWaiting(null);
+      mutation.reset();
+    },
   };
 }

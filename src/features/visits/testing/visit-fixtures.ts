@@ -105,6 +105,7 @@ interface VisitOptions {
   bandSet?: BandSetRecord | null;
   generationSuggestion?: VisitDetail['generationSuggestion'];
   reviewComment?: string | null;
+  version?: number;
 }
 
 /** A visit as GET /api/visits/:id sends it, with the path worked out by the real traversal engine. */
@@ -150,6 +151,7 @@ export function visitDetail(options: VisitOptions = {}): VisitDetail {
     },
     reviewComment: options.reviewComment ?? null,
     cancellation: null,
+    version: options.version ?? 1,
   };
 }
 

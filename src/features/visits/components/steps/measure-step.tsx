@@ -9,6 +9,8 @@ import type { ResilientSave } from '../../hooks/use-resilient-save';
 import { conditionsKey, draftFromReading, parseConditions, storedConditions } from '../../lib/reading-conditions';
 import { answerInputs, answerReason, currentReadings, outcomeLabel } from '../../lib/step-records';
 import { SaveStatusBanner } from '../save-status-banner';
+import { restoreUnsaved, useKeepUnsaved } from '../../hooks/use-unsaved-readings';
+import { RestoredNotice } from '@/components/ui/restored-notice';
 import { GenerationPicker } from './generation-picker';
 import { ReadingConditionsFields } from './reading-conditions-fields';
 import { ReadingInput } from './reading-input';
@@ -22,6 +24,8 @@ interface MeasureStepViewProps {
   result: StepResultRecord | undefined;
   answer: ResilientSave<StepAnswerVars, VisitDetail>;
   editable: boolean;
+  /** Where readings typed but not saved yet are kept on this device (per person and visit). */
+  draftKey?: string;
 }
 
 const formatFrequency = (hz: number) => (hz >= 1000 ? `${Number((hz / 1000).toPrecision(4))} kHz` : `${hz} Hz`);
@@ -37,11 +41,17 @@ function contextFor(spec: ReadingSpec, specs: ReadingSpec[], drafts: Record<stri
   return { otherStatorEntered: partner ? drafts[partner.key] : undefined, excitationEntered: excitation ? drafts[excitation.key] : undefined };
 }
 
-export function MeasureStepView({ visit, step, result, answer, editable }: MeasureStepViewProps) {
+export function MeasureStepView({ visit, step, result, answer, editable, draftKey }: MeasureStepViewProps) {
   const stored = currentReadings(visit, step.id);
-  const [drafts, setDrafts] = useState<Record<string, string>>(() =>
-    Object.fromEntries(step.readings.map((spec) => [spec.key, stored.find(specMatches(spec))?.entered ?? ''])),
-  );
+  const savedEntries = () => Object.fromEntries(step.readings.map((spec) => [spec.key, stored.find(specMatches(spec))?.entered ?? '']));
+  const [initial] = useState(() => restoreUnsaved(draftKey, step, savedEntries()));
+  const [drafts, setDrafts] = useState<Record<string, string>>(initial.drafts);
+  const [restoredAt, setRestoredAt] = useState(initial.restoredAt);
+  useKeepUnsaved(draftKey, step, drafts, savedEntries());
+  const discardRestored = () => {
+    setDrafts(savedEntries());
+    setRestoredAt(null);
+  };
   const [conditionsDraft, setConditionsDraft] = useState(() => draftFromReading(stored.find((r) => r.quantity === 'resistance')));
   const [resaveRound, setResaveRound] = useState(0);
   const [generation, setGeneration] = useState(visit.generationSuggestion?.best?.generationKey ?? '');
@@ -78,6 +88,7 @@ export function MeasureStepView({ visit, step, result, answer, editable }: Measu
 
   return (
     <div className="space-y-4">
+      {restoredAt && <RestoredNotice savedAt={restoredAt} onDiscard={discardRestored} what="readings you typed" />}
       <p className="rounded-lg bg-surface-sunken px-4 py-3 text-lg text-ink">
         <span className="font-semibold">Meter setting: </span>
         {step.meterSetting}

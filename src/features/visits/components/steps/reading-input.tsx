@@ -4,15 +4,16 @@ import { judgeEntry, type EntryContext, type EntryJudgement } from '@shared/doma
 import { entryQuestion, parseEntry, type EntryQuestion } from '@shared/domain/parse-entry';
 import type { BandSetValues } from '@shared/schemas/band-set';
 import type { ReadingSpec } from '@shared/schemas/procedure';
-import type { ReadingRecord } from '@shared/schemas/visit-detail';
+import type { ReadingRecord, StaleVersionCurrent } from '@shared/schemas/visit-detail';
 import { Button } from '@/components/ui/button';
 import { TextInput } from '@/components/ui/text-input';
 import { VerdictMark } from '@/components/ui/verdict-mark';
-import { isApiError } from '@/lib/api-error';
+import { isApiError, isStaleVersion } from '@/lib/api-error';
 import { useSaveReading } from '../../hooks/use-save-reading';
 import { conditionsKey, storedConditions, type ReadingConditions } from '../../lib/reading-conditions';
 import { SaveStatusBanner } from '../save-status-banner';
 import { BandGauge } from './band-gauge';
+import { ReadingConflict } from './reading-conflict';
 
 const UNIT_CHIPS = { resistance: ['Ω', 'kΩ', 'MΩ'], ac_voltage: ['V', 'mV'] } as const;
 const POSITION_WORDS = { control_end: 'at the control end', sensor_end: 'at the sensor end' } as const;
@@ -61,14 +62,18 @@ export function ReadingInput(props: ReadingInputProps) {
   /** Saves the entry, or returns the question to ask first (a lone 1, or a winding below 1 Ω). */
   const commit = (text = entered, confirmed = false): EntryQuestion | null => {
     if (disabled || !text || !parseEntry(text, spec.quantity).ok) return null;
+    // A conflict with another device's save waits for the person's choice in its dialog (leaving the field must not decide it).
+    if (save.isRejected && isStaleVersion(save.error)) return null;
     if (stored && stored.entered === text && conditionsKey(storedConditions(stored)) === conditionsKey(conditions)) return null;
-    const pending = save.isWaitingToRetry ? save.variables : undefined;
+    // The same value already on its way (sending, retrying, or waiting for a sign-in) is not sent twice.
+    const pending = save.inFlight() ?? (save.isWaitingToRetry ? save.variables : undefined);
     if (pending && pending.entered === text && conditionsKey(pending) === conditionsKey(conditions)) return null;
     // A value already saved was answered when it was saved.
     const question = entryQuestion(text, spec.quantity);
     if (question && !confirmed && stored?.entered !== text) return question;
-    // A new id per value typed: retries of this value reuse it, so the server keeps one copy.
-    save.save({ id: crypto.randomUUID(), stepId, quantity: spec.quantity, circuit: spec.circuit, position: spec.position, entered: text, ...(question ? { confirmed: true } : {}), ...conditions });
+    // A new id per value typed: retries of this value reuse it, so the server keeps one copy. `replaces`
+    // names the reading this screen shows, so one saved meanwhile elsewhere is not overwritten silently.
+    save.save({ id: crypto.randomUUID(), replaces: stored?.id ?? null, stepId, quantity: spec.quantity, circuit: spec.circuit, position: spec.position, entered: text, ...(question ? { confirmed: true } : {}), ...conditions });
     return null;
   };
   const commitOrAsk = (text = entered, confirmed = false) => {
@@ -185,6 +190,19 @@ export function ReadingInput(props: ReadingInputProps) {
         </ul>
       )}
       <SaveStatusBanner save={save} what={`the reading “${save.variables?.entered ?? entered}”`} />
+      {save.isRejected && isStaleVersion(save.error) && save.variables && (
+        <ReadingConflict
+          label={`${spec.label} ${POSITION_WORDS[spec.position]}`}
+          sent={save.variables.entered}
+          onServer={(save.error.current as StaleVersionCurrent).reading ?? null}
+          busy={save.isSaving}
+          onKeepMine={(onServer) => save.save({ ...save.variables!, id: crypto.randomUUID(), replaces: onServer?.id ?? null })}
+          onTakeTheirs={(onServer) => {
+            onDraftChange(onServer?.entered ?? '');
+            save.reset();
+          }}
+        />
+      )}
     </div>
   );
 }

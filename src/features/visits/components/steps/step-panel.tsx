@@ -10,6 +10,7 @@ import { FirmwareStepView } from './firmware-step';
 import { MeasureStepView } from './measure-step';
 import { OutcomeStepView } from './outcome-step';
 import { SafetyGateStepView } from './safety-gate-step';
+import { StepConflict } from './step-conflict';
 import { StepHistory } from './step-history';
 
 interface StepPanelProps {
@@ -19,10 +20,12 @@ interface StepPanelProps {
   /** Called with the server's answer, so the page can move on to the step it says is next. */
   onAnswered: (visit: VisitDetail) => void;
   renderPhotos: (stepId: string, prompt: string) => ReactNode;
+  /** Where readings typed and not saved yet are kept on this device. */
+  readingsDraftKey?: string;
 }
 
 /** One step: its title, instructions, safety message, inputs and history. */
-export function StepPanel({ visit, step, names, onAnswered, renderPhotos }: StepPanelProps) {
+export function StepPanel({ visit, step, names, onAnswered, renderPhotos, readingsDraftKey }: StepPanelProps) {
   const answer = useAnswerStep(visit.id, onAnswered);
   const result = currentResult(visit, step.id);
   const editable = isVisitOpen(visit);
@@ -50,8 +53,9 @@ export function StepPanel({ visit, step, names, onAnswered, renderPhotos }: Step
       ))}
       {/* Keyed by the answer, so a new answer from the server resets the drafts to it; a measure step
           keeps its typed readings (and any save still waiting to be retried). */}
-      <StepBody key={step.kind === 'measure' ? step.id : `${step.id}-${result?.id ?? 'none'}`} {...{ visit, step, result, answer, editable: editable && !noLongerApplies, names, photos }} />
+      <StepBody key={step.kind === 'measure' ? step.id : `${step.id}-${result?.id ?? 'none'}`} {...{ visit, step, result, answer, editable: editable && !noLongerApplies, names, photos, readingsDraftKey }} />
       <StepHistory visit={visit} step={step} names={names} />
+      <StepConflict step={step} answer={answer} names={names} />
     </section>
   );
 }
@@ -64,6 +68,7 @@ function StepBody({
   editable,
   names,
   photos,
+  readingsDraftKey,
 }: {
   visit: VisitDetail;
   step: Step;
@@ -72,6 +77,7 @@ function StepBody({
   editable: boolean;
   names: PersonNames;
   photos: (prompt: string) => ReactNode;
+  readingsDraftKey?: string;
 }) {
   switch (step.kind) {
     case 'safety_gate':
@@ -79,7 +85,7 @@ function StepBody({
     case 'firmware':
       return <FirmwareStepView visit={visit} step={step} result={result} answer={answer} editable={editable} />;
     case 'measure':
-      return <MeasureStepView visit={visit} step={step} result={result} answer={answer} editable={editable} />;
+      return <MeasureStepView visit={visit} step={step} result={result} answer={answer} editable={editable} draftKey={readingsDraftKey} />;
     case 'finding':
       return <FindingView step={step} visitId={visit.id} reached={visit.traversal.findingIds.includes(step.id)} />;
     default:
