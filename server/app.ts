@@ -23,7 +23,7 @@ import { configureInvites } from './modules/admin/invite-email';
 import { inviteLinkKey } from './modules/admin/invite-token';
 import { configureMail } from './modules/emails/mail-transport';
 import { reportLinkKey } from './modules/reports/report-link';
-import { configureReports, enqueueVisitReport } from './modules/reports/reports.service';
+import { configureReports, enqueueVisitReport, reportDelivery } from './modules/reports/reports.service';
 import { configureVisitClose } from './modules/visits/visit-close-ports';
 import { DiskStorage } from './lib/file-storage';
 import { customerRoutes } from './modules/customers/customers.routes';
@@ -116,7 +116,7 @@ export function createApp({ env, sequelize }: AppDeps): CrankwiseApp {
   api.use('/sites', siteRoutes());
   api.use('/presses', pressRoutes());
   api.use('/visits/:visitId/attachments', attachmentRoutes(attachments, { maxUploadBytes: env.UPLOAD_MAX_BYTES, uploadDir: storage.root }));
-  api.use('/visits', visitRoutes());
+  api.use('/visits', visitRoutes({ reportDelivery }));
   api.use('/admin', adminRoutes());
   api.use('/invites', inviteRoutes());
   api.use('/manager', managerRoutes());

@@ -5,7 +5,7 @@ import type { VisitDetail } from '../../shared/schemas/visit-detail';
 import { signedInAgent, useApiApp } from '../api-app';
 import { makePress, makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
-import { answer, makeTestBandSet, signaturePng, windingReadings, workToResistanceStep } from '../visit-steps';
+import { answer, makeTestBandSet, returnedToProduction, signaturePng, windingReadings, workToResistanceStep } from '../visit-steps';
 
 // A visit returned for correction, reopened and closed again: the record stays whole.
 
@@ -33,7 +33,7 @@ async function closeOut(id: number, parts: ReturnType<typeof sensor>[], extra: R
     parts,
     labourMinutes: 60,
     travelMinutes: 20,
-    returnToService: { faultCleared: true, tdcAgrees: true, stoppingTimeChecked: true, presenceSensingDistanceOk: 'not_fitted' },
+    ...returnedToProduction(),
     contactName: 'Pat Plant',
     contactEmail: 'pat@plant.example',
     signaturePng: await signaturePng(),

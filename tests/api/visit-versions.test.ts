@@ -5,7 +5,7 @@ import type { StepResultRecord, VisitDetail } from '../../shared/schemas/visit-d
 import { signedInAgent, useApiApp } from '../api-app';
 import { makePress, makeUser } from '../factories';
 import { useTestDatabase } from '../setup/database';
-import { answer, makeTestBandSet, reading, signaturePng, windingReadings, workToResistanceStep } from '../visit-steps';
+import { answer, makeTestBandSet, reading, returnedToProduction, signaturePng, windingReadings, workToResistanceStep } from '../visit-steps';
 
 // Two tabs (two sessions of the same technician) work the same visit. A write based on what the
 // other tab has changed since is refused with 409 stale_version and the server's value, never applied
@@ -45,7 +45,7 @@ async function closeOutBody(extra: Record<string, unknown>) {
     parts: [{ id: randomUUID(), partNumber: 'TEST-PART-1', description: 'Sensor (test part)', quantity: 1 }],
     labourMinutes: 60,
     travelMinutes: 20,
-    returnToService: { faultCleared: true, tdcAgrees: true, stoppingTimeChecked: true, presenceSensingDistanceOk: 'not_fitted' },
+    ...returnedToProduction(),
     contactName: 'Pat Plant',
     contactEmail: 'pat@plant.example',
     signaturePng: await signaturePng(),

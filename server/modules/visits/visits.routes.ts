@@ -14,11 +14,12 @@ import { ANY_ROLE, OFFICE_ROLES, requireRole } from '../../auth/require-role';
 import { valid, validate } from '../../lib/validate';
 import { saveReading } from './readings.service';
 import { answerStep } from './step-answers.service';
-import { getReportDelivery } from './report-delivery.service';
+import { getReportDelivery, type ReportDeliveryLookup } from './report-delivery.service';
 import { cancelVisit, closeVisit, reopenVisit, reviewVisit } from './visit-status.service';
 import { createVisit, getVisitDetail, listVisits } from './visits.service';
 
-export function visitRoutes(): Router {
+/** `reportDelivery` comes from the reports module through createApp, so visits does not import it (no module cycle). */
+export function visitRoutes({ reportDelivery }: { reportDelivery: ReportDeliveryLookup }): Router {
   const router = Router();
   const anyone = requireRole(...ANY_ROLE);
   const id = validate('params', idParamSchema);
@@ -54,7 +55,7 @@ export function visitRoutes(): Router {
   });
 
   router.get('/:id/report-delivery', anyone, id, async (req, res) => {
-    res.json({ delivery: await getReportDelivery(req.user!, visitId(req)) });
+    res.json({ delivery: await getReportDelivery(req.user!, visitId(req), reportDelivery) });
   });
 
   router.post('/:id/reopen', anyone, id, async (req, res) => {
