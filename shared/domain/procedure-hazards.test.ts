@@ -89,6 +89,12 @@ describe('stepHazards — hazards from the kind of step and where it sits', () =
     expect(hazardsOf(measure('resistance', 'sensor_end'))).toEqual({ working_at_height: 'it is done at the sensor' });
   });
 
+  it('one voltage reading makes a mixed step energized work; one sensor-end reading puts it at the sensor', () => {
+    const mixed = measure('resistance', 'control_end') as Extract<Step, { kind: 'measure' }>;
+    mixed.readings.push({ key: 'v', label: 'V', quantity: 'ac_voltage', circuit: 'rotor', position: 'sensor_end', band: { kind: 'excitation' } });
+    expect(hazardsOf(mixed)).toEqual({ energized_work: 'it measures on energized circuits', working_at_height: 'it is done at the sensor' });
+  });
+
   it('a live-work gate restores power; a lockout, press-at-rest or die-area gate does not', () => {
     expect(hazardsOf(gate('live_work'))).toEqual({ energized_work: 'it restores power for energized work' });
     for (const g of ['lockout', 'press_at_rest', 'die_area'] as const) expect(hazardsOf(gate(g))).toEqual({});
