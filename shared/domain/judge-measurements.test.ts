@@ -236,3 +236,18 @@ describe('judgeMeasurements — energized outcomes, each way', () => {
     expect(result.balance?.balanced).toBe(false);
   });
 });
+
+describe('judgeMeasurements — the excitation found by circuit, and every failing output named', () => {
+  it('an excitation listed last still decides: pair 1.3 / 1.7 V in range, excitation 5.5 V high', () => {
+    const [rotor, s1, s2] = voltages('5.5', '1.3', '1.7');
+    expect(judgeMeasurements([s1!, s2!, rotor!], OLDER_GENERATION).outcome).toBe('excitation_out_of_range');
+  });
+
+  it('output high on magnitude and ratio names both, one after the other', () => {
+    // 2.828 V is 13.1 % above 2.5 V; 2.828 / 4.2 = 0.673 is 12.2 % above 0.6 (computed).
+    const band = { ...OLDER_GENERATION, transformationRatio: { min: 0.45, max: 0.6, nearEdgePercent: 5 } };
+    const result = judgeMeasurements(voltages('4.2', '2.0', '2.0'), band);
+    expect(result.outcome).toBe('output_high');
+    expect(result.reason).toMatch(/2\.828 V is 13\.1 % above .*%\. Ratio 0\.673 is 12\.2 % above/);
+  });
+});
