@@ -115,3 +115,12 @@ describe('inferGeneration — the numbers behind the suggestion', () => {
     expect(result.ranked.map((r) => r.confidence)).toEqual([0.5, 0.5]);
   });
 });
+
+describe('inferGeneration — the near-edge limit', () => {
+  // Stator 84 Ω is (84 − 70) / 70 = 20 % above the older nominal: exactly its near-edge limit (computed).
+  it('a reading exactly at a candidate\'s near-edge limit still fits it; just beyond does not', () => {
+    const older = (value: number) => inferGeneration({ stator_1: value }, TRADE_CANDIDATES).ranked.find((r) => r.generationKey === 'older')!;
+    expect(older(84).fitsAllReadings).toBe(true);
+    expect(older(84.1).fitsAllReadings).toBe(false);
+  });
+});

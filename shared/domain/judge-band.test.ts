@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { FC_SEED } from './testing/fast-check-seed';
 import type { WindingBand } from '../schemas/band-set';
-import { judgeResistance, judgeVoltage, VERDICT_SEVERITY } from './judge-band';
+import { judgeRatio, judgeResistance, judgeVoltage, VERDICT_SEVERITY } from './judge-band';
 import { NEWER_GENERATION, OLDER_GENERATION } from './testing/trade-fact-band-sets';
 
 // A band made up for these tests only (not a check value): nominal 100 Ω, ±5 % / ±10 %.
@@ -173,5 +173,44 @@ describe('judgeVoltage — deviation from the nearest edge, and the reason', () 
     expect(result.reason).toContain('OL');
     expect(result.reason).toContain('AC volts');
     expect(result.reason).toContain('expected 4 V to 4.5 V');
+  });
+});
+
+describe('judgeRatio — transformation ratio against its band', () => {
+  // Resolver references call a ratio near 0.5 common; the band here is the tests' own choice. Figures computed by hand.
+  const band = { min: 0.45, max: 0.6, nearEdgePercent: 5 };
+
+  it('inside the band: in band, no direction, naming the ratio and the band', () => {
+    const j = judgeRatio(0.51, band);
+    expect(j).toMatchObject({ verdict: 'in_band', direction: null, deviationPercent: 0 });
+    expect(j.reason).toContain('0.510');
+    expect(j.reason).toContain('0.450 to 0.600');
+  });
+
+  it('exactly on either limit is in band', () => {
+    expect(judgeRatio(0.45, band).verdict).toBe('in_band');
+    expect(judgeRatio(0.6, band).verdict).toBe('in_band');
+  });
+
+  it('above the band: 0.66 is 10 % above 0.6, out of band high; 0.615 is 2.5 % above, near the edge', () => {
+    const out = judgeRatio(0.66, band);
+    expect(out).toMatchObject({ verdict: 'out_of_band', direction: 'high' });
+    expect(out.deviationPercent).toBeCloseTo(10, 9);
+    expect(out.reason).toMatch(/0\.660 is 10(\.0)? % above .*beyond/);
+    const near = judgeRatio(0.615, band);
+    expect(near).toMatchObject({ verdict: 'near_edge', direction: 'high' });
+    expect(near.deviationPercent).toBeCloseTo(2.5, 9);
+    expect(near.reason).toMatch(/above .*within/);
+  });
+
+  it('below the band: 0.44 is 2.2 % below 0.45, near the edge, low', () => {
+    const j = judgeRatio(0.44, band);
+    expect(j).toMatchObject({ verdict: 'near_edge', direction: 'low' });
+    expect(j.deviationPercent).toBeCloseTo(-2.222, 3);
+    expect(j.reason).toContain('below');
+  });
+
+  it('a deviation exactly at the near-edge margin is still near the edge: 0.55 is 10 % above 0.5 with a 10 % margin', () => {
+    expect(judgeRatio(0.55, { min: 0.4, max: 0.5, nearEdgePercent: 10 }).verdict).toBe('near_edge');
   });
 });

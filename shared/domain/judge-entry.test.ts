@@ -256,3 +256,31 @@ describe('judgeEntry (AC voltage) — partners, OL and the resolver figures', ()
     expect(result.notes[0]).toContain('2.163 V');
   });
 });
+
+describe('judgeEntry — the ratio band and a reading equal to nothing', () => {
+  const RATIO_BAND = { ...OLDER_GENERATION, transformationRatio: { min: 0.45, max: 0.6, nearEdgePercent: 5 } };
+  const volts = (circuit: ReadingInput['circuit'], entered: string): ReadingInput => ({ quantity: 'ac_voltage', circuit, position: 'control_end', entered });
+
+  it('with a ratio band and the excitation, the ratio is judged and its reason is a note: 2.163 V / 4.2 V = 0.515 (computed)', () => {
+    const result = judged(judgeEntry(volts('stator_1', '1.2'), RATIO_BAND, { otherStatorEntered: '1.8', excitationEntered: '4.2' }));
+    expect(result.notes).toHaveLength(2);
+    expect(result.notes[1]).toContain('Ratio 0.515 is within 0.450 to 0.600');
+    if (result.figures.kind !== 'ac_voltage') throw new Error('voltage figures expected');
+    expect(result.figures.ratio?.verdict).toBe('in_band');
+  });
+
+  it('with a ratio band but no excitation, there is no ratio to judge', () => {
+    const result = judged(judgeEntry(volts('stator_1', '1.2'), RATIO_BAND, { otherStatorEntered: '1.8' }));
+    if (result.figures.kind !== 'ac_voltage') throw new Error('voltage figures expected');
+    expect(result.figures.ratio).toBeNull();
+    expect(result.notes).toHaveLength(1);
+  });
+
+  it('0 Ω is a short before any temperature step: no corrected value and no correction note', () => {
+    const result = judged(judgeEntry(rotor('0'), OLDER_GENERATION));
+    expect(result.verdict).toBe('short');
+    if (result.figures.kind !== 'resistance') throw new Error('resistance figures expected');
+    expect(result.figures.atReference).toBeNull();
+    expect(result.notes).toEqual([]);
+  });
+});

@@ -156,3 +156,98 @@ describe('judgeMeasurements — outcome rules and the reasons shown', () => {
     expect(s1.figures.output!.transformationRatio).toBeCloseTo(0.5, 3);
   });
 });
+
+describe('judgeMeasurements — energized outcomes, each way', () => {
+  const RATIO_BAND = { ...OLDER_GENERATION, transformationRatio: { min: 0.45, max: 0.6, nearEdgePercent: 5 } };
+
+  // Resolver theory: magnitude = √(S1² + S2²). 2.0 V and 2.0 V → 2.828 V, (2.828 − 2.5) / 2.5 = 13.1 % above
+  // the trade's 2–2.5 V (computed; bands common practice, no published source).
+  it('output_high when the pair is high with the excitation in range, naming the magnitude and how far above', () => {
+    const result = judgeMeasurements(voltages('4.2', '2.0', '2.0'), OLDER_GENERATION);
+    expect(result.outcome).toBe('output_high');
+    expect(result.reason).toMatch(/^Excitation in range, output high: Stator pair: 2\.828 V is 13\.1 % above/);
+    expect(outcomeForStep(result, ['pass', 'low', 'high'])).toBe('high');
+    expect(outcomeForStep(result, ['pass', 'excitation_out_of_range', 'output_low', 'output_high'])).toBe('output_high');
+  });
+
+  it('a low pair and a low ratio are both named in the output_low reason', () => {
+    // √(0.8² + 1.0²) = 1.281 V (36.0 % below 2 V); ratio 1.281 / 4.4 = 0.291 (35.3 % below 0.45) — computed.
+    const result = judgeMeasurements(voltages('4.4', '0.8', '1.0'), RATIO_BAND);
+    expect(result.outcome).toBe('output_low');
+    expect(result.reason).toMatch(/output low: Stator pair: 1\.281 V is 36\.0 % below .* Ratio 0\.291 is 35\.3 % below/);
+  });
+
+  it('the excitation reason names the board and the value: 2.9 V is 27.5 % below 4 V (computed)', () => {
+    const result = judgeMeasurements(voltages('2.9', '0.8', '1.0'), OLDER_GENERATION);
+    expect(result.reason).toMatch(/^Excitation \(the board's drive\): 2\.9 V is 27\.5 % below/);
+  });
+
+  it('an excitation near the edge passes but asks for a note; in range says so', () => {
+    // 4.6 V is 2.2 % above 4.5 V, inside the 5 % near-edge margin.
+    expect(judgeMeasurements(voltages('4.6', '1.3', '1.7'), OLDER_GENERATION)).toMatchObject({ outcome: 'pass', reason: 'All voltages pass; some near the edge: note for the next visit.' });
+    expect(judgeMeasurements(voltages('4.2', '1.3', '1.7'), OLDER_GENERATION).reason).toBe('Excitation, stator output and ratio are in range.');
+  });
+
+  it('a stator pair near the edge (1.8 V and 1.77 V: 2.524 V, 1.0 % above 2.5 V) also asks for a note', () => {
+    expect(judgeMeasurements(voltages('4.2', '1.8', '1.77'), OLDER_GENERATION).reason).toBe('All voltages pass; some near the edge: note for the next visit.');
+  });
+
+  it('by ratio alone, a ratio out of band gives output_low or output_high, and the reason says why the ratio was used', () => {
+    // 0.78 and 1.02 V → 1.284 V / 4.2 V = 0.306, 32.1 % below 0.45; 2.0 and 2.0 V → 2.828 / 4.2 = 0.673, 12.2 % above 0.6 (computed).
+    const low = judgeMeasurements(voltages('4.2', '0.78', '1.02'), RATIO_BAND, { ratioOnly: true });
+    expect(low.outcome).toBe('output_low');
+    expect(low.reason).toMatch(/^Judged by the transformation ratio only, because the meter does not cover the excitation frequency: Ratio 0\.306 is 32\.1 % below/);
+    const high = judgeMeasurements(voltages('4.2', '2.0', '2.0'), RATIO_BAND, { ratioOnly: true });
+    expect(high.outcome).toBe('output_high');
+    expect(high.reason).toContain('Ratio 0.673 is 12.2 % above');
+  });
+
+  it('old procedures: an excitation low maps to low, high to high, read from the rotor wherever it is listed', () => {
+    const low = judgeMeasurements(voltages('2.9', '1.3', '1.7'), OLDER_GENERATION);
+    expect(outcomeForStep(low, ['pass', 'low', 'high'])).toBe('low');
+    // Rotor listed last, the stator pair low: the excitation (5.5 V, high) decides, not the first reading.
+    const [rotor, s1, s2] = voltages('5.5', '0.8', '1.0');
+    const reordered = judgeMeasurements([s1!, s2!, rotor!], OLDER_GENERATION);
+    expect(reordered.outcome).toBe('excitation_out_of_range');
+    expect(outcomeForStep(reordered, ['pass', 'low', 'high'])).toBe('high');
+  });
+
+  it('an outcome a step does not offer and that has no older equivalent is passed on unchanged', () => {
+    const imbalance = judgeMeasurements(windings('89', '66', '74'), OLDER_GENERATION);
+    expect(outcomeForStep(imbalance, ['pass', 'low', 'high'])).toBe('imbalance');
+  });
+
+  it('the ratio uses the excitation reading wherever it is listed (E = 7.0 V, pair 3.5 V → 0.500)', () => {
+    const [rotor, s1, s2] = voltages('7.0', '1.750', '3.031');
+    const result = judgeMeasurements([s1!, s2!, rotor!], OLDER_GENERATION);
+    const j = result.results[0]!.judgement;
+    if (j.status !== 'judged' || j.figures.kind !== 'ac_voltage') throw new Error('judged voltage expected');
+    expect(j.figures.output!.transformationRatio).toBeCloseTo(0.5, 3);
+  });
+
+  it('an energized step with the excitation only is judged by it', () => {
+    const [rotor] = voltages('4.2', '1.3', '1.7');
+    expect(judgeMeasurements([rotor!], OLDER_GENERATION)).toMatchObject({ outcome: 'pass', reason: 'Excitation, stator output and ratio are in range.' });
+  });
+
+  it('readings that mix voltages and windings are judged as energized, with the stator balance from the windings', () => {
+    const result = judgeMeasurements([...voltages('4.2', '1.3', '1.7'), ...windings('89', '66', '74')], OLDER_GENERATION);
+    expect(result.reason).toBe('Excitation, stator output and ratio are in range.');
+    expect(result.balance?.balanced).toBe(false);
+  });
+});
+
+describe('judgeMeasurements — the excitation found by circuit, and every failing output named', () => {
+  it('an excitation listed last still decides: pair 1.3 / 1.7 V in range, excitation 5.5 V high', () => {
+    const [rotor, s1, s2] = voltages('5.5', '1.3', '1.7');
+    expect(judgeMeasurements([s1!, s2!, rotor!], OLDER_GENERATION).outcome).toBe('excitation_out_of_range');
+  });
+
+  it('output high on magnitude and ratio names both, one after the other', () => {
+    // 2.828 V is 13.1 % above 2.5 V; 2.828 / 4.2 = 0.673 is 12.2 % above 0.6 (computed).
+    const band = { ...OLDER_GENERATION, transformationRatio: { min: 0.45, max: 0.6, nearEdgePercent: 5 } };
+    const result = judgeMeasurements(voltages('4.2', '2.0', '2.0'), band);
+    expect(result.outcome).toBe('output_high');
+    expect(result.reason).toMatch(/2\.828 V is 13\.1 % above .*%\. Ratio 0\.673 is 12\.2 % above/);
+  });
+});

@@ -179,3 +179,23 @@ describe('evidenceFromReadings — each trade rule on its own', () => {
     expect(evidenceFromReadings(judgedAll(volts('4.2', '1.3', '1.7')))).toEqual([{ cause: 'board', weight: -2, because: leads('Excitation and output read right') }]);
   });
 });
+
+describe('evidenceFromPath — outcomes without evidence', () => {
+  const definition = {
+    formatVersion: 1 as const,
+    start: 'look',
+    steps: [
+      { id: 'look', kind: 'check' as const, title: 'Look', instructions: 'x', outcomes: [
+        { value: 'yes', label: 'y', next: 'end', evidence: [{ cause: 'cable' as const, weight: 1, because: 'Chafed.' }] },
+        { value: 'no', label: 'n', next: 'end' },
+      ] },
+      { id: 'end', kind: 'finding' as const, title: 'End', instructions: 'x', cause: 'none_found' as const, conclusion: 'c', recommendedAction: 'a', escalate: false },
+    ],
+  };
+
+  it('an outcome that carries no evidence adds none, and an outcome the step does not have adds none', () => {
+    expect(evidenceFromPath(definition, [{ stepId: 'look', kind: 'check', outcome: 'no' }])).toEqual([]);
+    expect(evidenceFromPath(definition, [{ stepId: 'look', kind: 'check', outcome: 'maybe' }])).toEqual([]);
+    expect(evidenceFromPath(definition, [{ stepId: 'look', kind: 'check', outcome: 'yes' }])).toEqual([{ cause: 'cable', weight: 1, because: 'Chafed.' }]);
+  });
+});

@@ -218,3 +218,39 @@ describe('parseEntry — anchors, number forms and units', () => {
     expect(parseEntry('4.2 kA', 'ac_voltage')).toEqual({ ok: false, error: 'Type a number such as 4.2, optionally with a unit (V or mV).' });
   });
 });
+
+describe('parseEntry — edges of the accepted forms', () => {
+  it('the ohm sign (U+2126) is read as Ω: typed into the voltage field it is a resistance, not 89 V', () => {
+    expect(parseEntry('89 \u2126', 'ac_voltage')).toEqual({ ok: false, error: expect.stringContaining('That is a resistance') });
+  });
+
+  it('runs of spaces inside a unit count as one: "4.2 v  ac" is 4.2 V', () => {
+    expect(valueOf(parseEntry('4.2 v  ac', 'ac_voltage'))).toBe(4.2);
+  });
+
+  it('a decimal with no leading digit keeps every digit: ".25" is 0.25', () => {
+    expect(valueOf(parseEntry('.25', 'ac_voltage'))).toBe(0.25);
+    expect(valueOf(parseEntry('.125 kΩ', 'resistance'))).toBe(125);
+  });
+
+  it('an unknown letter before a unit is not read as a prefix: "4.2 xV" gets the voltage help, not a number error', () => {
+    expect(parseEntry('4.2 xV', 'ac_voltage')).toEqual({ ok: false, error: 'Type a number such as 4.2, optionally with a unit (V or mV).' });
+  });
+
+  it('DC is recognised only as a whole unit: "4.2 xvdc" and "4.2 Vdcx" get the voltage help', () => {
+    for (const entered of ['4.2 xvdc', '4.2 Vdcx']) {
+      expect(parseEntry(entered, 'ac_voltage')).toEqual({ ok: false, error: 'Type a number such as 4.2, optionally with a unit (V or mV).' });
+    }
+  });
+
+  it('a decimal comma after a sign is still a decimal comma, and text before the number is refused', () => {
+    expect(valueOf(parseEntry('+4,2', 'ac_voltage'))).toBe(4.2);
+    expect(parseEntry('x4,25', 'ac_voltage').ok).toBe(false);
+  });
+
+  it('the lone-1 question is asked for a lone 1 only, and says what OL means', () => {
+    expect(entryQuestion('1', 'resistance')?.question).toMatch(/lone 1.*over range \(OL\)/);
+    expect(entryQuestion('11', 'resistance')).toBeNull();
+    expect(entryQuestion('21', 'ac_voltage')).toBeNull();
+  });
+});

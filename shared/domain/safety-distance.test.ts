@@ -234,3 +234,9 @@ describe('iso13855Distance — range, intrusion term and the 500 mm recomputatio
     expect(result.unit).toBe('mm');
   });
 });
+
+describe('units of the OSHA results', () => {
+  it('the presence-sensing distance is in inches, like its 63 in/s constant', () => {
+    expect(oshaPresenceSensingDistance(0.5).unit).toBe('in');
+  });
+});

@@ -379,3 +379,36 @@ describe('validateProcedure — shape errors', () => {
     }
   });
 });
+
+describe('validateProcedure — exact problem lists (no rule fires where it should not)', () => {
+  it('an unreachable measure step is reported as unreachable only: with no path to it, no energy state is claimed', () => {
+    const d = edit((x) => x.steps.push({
+      id: 'stray-volts', kind: 'measure', title: 'V', instructions: 'Measure.', meterSetting: 'V~', safety: WARN,
+      readings: [{ key: 'e', label: 'E', quantity: 'ac_voltage', circuit: 'rotor', position: 'control_end', band: { kind: 'excitation' } }],
+      outcomes: [
+        { value: 'pass', label: 'Pass', next: 'none' },
+        { value: 'excitation_out_of_range', label: 'Drive', next: 'none' },
+        { value: 'output_low', label: 'Low', next: 'none' },
+        { value: 'output_high', label: 'High', next: 'none' },
+      ],
+    }));
+    expect(messages(d)).toEqual(['Step "stray-volts" cannot be reached from the start step "lock"']);
+  });
+
+  it('a duplicated step id is reported once, for that id only', () => {
+    const d = edit((x) => { x.steps.push(structuredClone(x.steps[6]!)); });
+    expect(messages(d).filter((m) => m.endsWith('is defined twice'))).toEqual(['Step "none" is defined twice']);
+  });
+
+  it('a step with any voltage reading counts as energized: after the lockout alone it lacks the live-work gate', () => {
+    const d = edit((x) => {
+      measure(x, 'ohms').readings.push({ key: 'e', label: 'E', quantity: 'ac_voltage', circuit: 'rotor', position: 'control_end', band: { kind: 'excitation' } });
+    });
+    expect(messages(d)).toContain('Step "ohms" is an energized measurement not preceded, on every path, by a live-work safety gate');
+    expect(messages(d)).not.toContain('Step "ohms" is a de-energized measurement not preceded, on every path, by a lockout safety gate');
+  });
+
+  it('an empty step list is a problem of the procedure, not of a step', () => {
+    expect(messages({ formatVersion: 1, start: 'lock', steps: [] })).toEqual([expect.stringMatching(/^steps: /)]);
+  });
+});

@@ -80,3 +80,11 @@ describe('dotted versions — more cases', () => {
     expect(versionInRange('4.0', { from: '4.0' })).toBe(true);
   });
 });
+
+describe('parseDottedVersion — the v prefix', () => {
+  it('drops a leading v only: "v4.2" is 4.2, but "4.2v" and "4v2" are not versions', () => {
+    expect(parseDottedVersion('v4.2')).toEqual([4, 2]);
+    expect(parseDottedVersion('4.2v')).toBeNull();
+    expect(parseDottedVersion('4v2')).toBeNull();
+  });
+});
