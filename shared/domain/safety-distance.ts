@@ -14,27 +14,17 @@ function requireTime(name: string, value: Seconds): void {
   if (!Number.isFinite(value) || value < 0) throw new RangeError(`${name} must be a time of 0 s or more.`);
 }
 
-/** OSHA 29 CFR 1910.217(c)(3)(iii)(e): Ds = 63 in/s × Ts, Ts measured at about 90° of crank rotation. */
-export function oshaPresenceSensingDistance(stoppingTime: Seconds): SafetyDistance<'in'> {
+/** Ds = 63 in/s × Ts: the hand-speed rule both OSHA paragraphs below state, with Ts measured at about 90° of crank rotation. */
+function handSpeedDistance(stoppingTime: Seconds, standard: string): SafetyDistance<'in'> {
   requireTime('Stopping time', stoppingTime);
-  return {
-    distance: HAND_SPEED * stoppingTime,
-    unit: 'in',
-    standard: 'OSHA 29 CFR 1910.217(c)(3)(iii)(e)',
-    formula: `Ds = 63 in/s × ${stoppingTime} s`,
-  };
+  return { distance: HAND_SPEED * stoppingTime, unit: 'in', standard, formula: `Ds = 63 in/s × ${stoppingTime} s` };
 }
 
-/** OSHA 29 CFR 1910.217(c)(3)(vii)(c): two-hand control, Ds = 63 in/s × Ts, Ts measured at about 90° of crank rotation. */
-export function oshaTwoHandControlDistance(stoppingTime: Seconds): SafetyDistance<'in'> {
-  requireTime('Stopping time', stoppingTime);
-  return {
-    distance: HAND_SPEED * stoppingTime,
-    unit: 'in',
-    standard: 'OSHA 29 CFR 1910.217(c)(3)(vii)(c)',
-    formula: `Ds = 63 in/s × ${stoppingTime} s`,
-  };
-}
+/** OSHA 29 CFR 1910.217(c)(3)(iii)(e): presence-sensing device, Ds = 63 in/s × Ts. */
+export const oshaPresenceSensingDistance = (stoppingTime: Seconds) => handSpeedDistance(stoppingTime, 'OSHA 29 CFR 1910.217(c)(3)(iii)(e)');
+
+/** OSHA 29 CFR 1910.217(c)(3)(vii)(c): two-hand control, Ds = 63 in/s × Ts. */
+export const oshaTwoHandControlDistance = (stoppingTime: Seconds) => handSpeedDistance(stoppingTime, 'OSHA 29 CFR 1910.217(c)(3)(vii)(c)');
 
 /** OSHA 29 CFR 1910.217(c)(3)(viii)(c): two-hand trip, Tm = (1/2 + 1/N) × time of one revolution. */
 export function oshaTwoHandTripDistance(strokesPerMinute: number, engagingPoints: number): SafetyDistance<'in'> & { maximumTime: Seconds } {

@@ -7,34 +7,24 @@ import { visitReference } from '../format/visit-reference';
 import { circuitLabel, POSITION_LABELS, QUANTITY_LABELS, verdictLabel, VISIT_STATUS_LABELS } from '../format/labels';
 import type { BandSetValues } from '../schemas/band-set';
 import type { ProcedureDefinition, SafetyMessage, Step } from '../schemas/procedure';
-import type { Cable, CauseCategory, Circuit, Position, Quantity, Verdict } from '../schemas/reading';
-import { CAUSE_LABELS, type AsLeftState, type LockedOut, type ReturnToService, type VisitStatus } from '../schemas/visit';
+import { CAUSE_LABELS, type ReturnToService, type VisitStatus } from '../schemas/visit';
 import { returnToServiceDistances } from '../domain/return-to-service';
 import type { AsLeft, RecordPathStep, RecordReading, VisitRecord } from '../schemas/visit-record';
+import type { CloseOutFacts, ReadingRecord } from '../schemas/visit-detail';
 import { AS_LEFT_HEADLINES, bandLine, distanceLine, RECORD_WORDS, RETURN_TO_SERVICE_CHECKS, WAITS_FOR_WORDS } from './record-wording';
 
 /** What the server reads for one visit, as plain values: the builder below turns it into the record. */
 export interface VisitRecordSource {
   companyName: string;
   timeZone: string;
-  visit: {
+  visit: CloseOutFacts & {
     id: number;
     status: VisitStatus;
     faultDisplayed: string;
     startedAt: string | null;
     closedAt: string | null;
     signedAt: string | null;
-    causeCategory: CauseCategory | null;
-    actionsTaken: string | null;
-    recommendations: string | null;
-    labourMinutes: number | null;
-    travelMinutes: number | null;
-    asLeftState: AsLeftState | null;
-    returnToService: ReturnToService | null;
-    lockedOut: LockedOut | null;
     cancellation: { at: string; by: string | null; reason: string } | null;
-    contactName: string | null;
-    contactEmail: string | null;
     controlFirmwareFound: string | null;
     controlFirmwareLeft: string | null;
     monitorFirmwareFound: string | null;
@@ -49,20 +39,7 @@ export interface VisitRecordSource {
   /** Every step result, oldest first, with superseded ones. */
   results: { stepId: string; outcome: string | null; inputs: Record<string, unknown>; note: string | null; confirmedAt: string | null; createdBy: number; supersededAt: string | null }[];
   /** Every reading, oldest first, with superseded ones. */
-  readings: {
-    id: string;
-    stepId: string;
-    quantity: Quantity;
-    circuit: Circuit;
-    position: Position;
-    entered: string;
-    windingTemperatureC: number | null;
-    cable: Cable | null;
-    verdict: Verdict | null;
-    reason: string;
-    judgement: Record<string, unknown>;
-    supersededAt: string | null;
-  }[];
+  readings: Pick<ReadingRecord, 'id' | 'stepId' | 'quantity' | 'circuit' | 'position' | 'entered' | 'windingTemperatureC' | 'cable' | 'verdict' | 'reason' | 'judgement' | 'supersededAt'>[];
   parts: { id: string; partNumber: string; description: string; quantity: number; serialRemoved: string | null; serialFitted: string | null }[];
   /** Photos and signatures, oldest first. */
   attachments: { id: string; kind: 'photo' | 'signature'; caption: string | null; stepId: string | null; hasThumb: boolean }[];

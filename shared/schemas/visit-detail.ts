@@ -99,25 +99,26 @@ export interface VisitDetail extends VisitSummary {
   traversal: VisitTraversal;
   likelyCauses: CauseRanking;
   generationSuggestion: GenerationInference | null;
-  closeOut: {
-    causeCategory: CauseCategory | null;
-    actionsTaken: string | null;
-    recommendations: string | null;
-    labourMinutes: number | null;
-    travelMinutes: number | null;
-    asLeftState: AsLeftState | null;
-    returnToService: ReturnToService | null;
-    lockedOut: LockedOut | null;
-    contactName: string | null;
-    contactEmail: string | null;
-    signedAt: string | null;
-    parts: PartRecord[];
-  };
+  closeOut: CloseOutFacts & { signedAt: string | null; parts: PartRecord[] };
   reviewComment: string | null;
   /** Set once the visit was cancelled (started by mistake); it is kept for the record. */
   cancellation: { at: string; reason: string } | null;
   /** Bumped with every write to the visit; a close-out sends the version it was filled against. */
   version: number;
+}
+
+/** What the close-out stored on a visit (the detail's `closeOut` and the record's source share it). */
+export interface CloseOutFacts {
+  causeCategory: CauseCategory | null;
+  actionsTaken: string | null;
+  recommendations: string | null;
+  labourMinutes: number | null;
+  travelMinutes: number | null;
+  asLeftState: AsLeftState | null;
+  returnToService: ReturnToService | null;
+  lockedOut: LockedOut | null;
+  contactName: string | null;
+  contactEmail: string | null;
 }
 
 /** `error.current` of a 409 stale_version: what the server holds now, to show beside what the person sent. */

@@ -41,42 +41,35 @@ function forgetOtherQueries(queryClient: QueryClient) {
   queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== sessionKeys.all[0] });
 }
 
-export function useSignIn() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: async (input: SignInInput) => {
-      const body = await apiRequest<{ user: unknown }>('/api/session', { method: 'POST', body: input });
-      return sessionUserSchema.parse(body.user);
-    },
-    // Wrong credentials answer 401 too; that is not an ended session.
-    meta: { allowUnauthorized: true },
-    onSuccess: (user) => {
-      forgetOtherQueries(queryClient);
-      sessionExpiry.abandon();
-      queryClient.setQueryData(sessionKeys.all, user);
-    },
-  });
+async function signInRequest(input: SignInInput) {
+  const body = await apiRequest<{ user: unknown }>('/api/session', { method: 'POST', body: input });
+  return sessionUserSchema.parse(body.user);
 }
+
+/** A sign-in whose success does `after` with the signed-in user (wrong credentials answer 401 too; that is not an ended session). */
+function useSignInMutation(after: (queryClient: QueryClient, user: SessionUser) => void) {
+  const queryClient = useQueryClient();
+  return useMutation({ mutationFn: signInRequest, meta: { allowUnauthorized: true }, onSuccess: (user) => after(queryClient, user) });
+}
+
+/** Signs in from the sign-in page: what was cached for anyone before is dropped. */
+export const useSignIn = () =>
+  useSignInMutation((queryClient, user) => {
+    forgetOtherQueries(queryClient);
+    sessionExpiry.abandon();
+    queryClient.setQueryData(sessionKeys.all, user);
+  });
 
 /**
  * Signs the same person in again over the page after their session ended: nothing cached is
  * dropped (the page and what is typed on it stay), errored queries load again and waiting writes go out.
  */
-export function useSignInAgain() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: async (input: SignInInput) => {
-      const body = await apiRequest<{ user: unknown }>('/api/session', { method: 'POST', body: input });
-      return sessionUserSchema.parse(body.user);
-    },
-    meta: { allowUnauthorized: true },
-    onSuccess: (user) => {
-      queryClient.setQueryData(sessionKeys.all, user);
-      sessionExpiry.renewed();
-      void queryClient.invalidateQueries({ predicate: (query) => query.state.status === 'error' });
-    },
+export const useSignInAgain = () =>
+  useSignInMutation((queryClient, user) => {
+    queryClient.setQueryData(sessionKeys.all, user);
+    sessionExpiry.renewed();
+    void queryClient.invalidateQueries({ predicate: (query) => query.state.status === 'error' });
   });
-}
 
 export function useSignOut() {
   const queryClient = useQueryClient();

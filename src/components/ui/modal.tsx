@@ -1,4 +1,5 @@
 import { useEffect, useId, useRef, type KeyboardEvent, type ReactNode } from 'react';
+import { focusables, keepTabInside } from '@/lib/focus-trap';
 
 interface ModalProps {
   title: string;
@@ -23,17 +24,7 @@ export function Modal({ title, children, onEscape }: ModalProps) {
 
   const onKeyDown = (event: KeyboardEvent) => {
     if (event.key === 'Escape' && onEscape) onEscape();
-    if (event.key !== 'Tab') return;
-    const all = focusables(boxRef.current);
-    const first = all[0];
-    const last = all.at(-1);
-    if (event.shiftKey && document.activeElement === first) {
-      event.preventDefault();
-      last?.focus();
-    } else if (!event.shiftKey && document.activeElement === last) {
-      event.preventDefault();
-      first?.focus();
-    }
+    keepTabInside(event, boxRef.current);
   };
 
   return (
@@ -47,6 +38,3 @@ export function Modal({ title, children, onEscape }: ModalProps) {
     </div>
   );
 }
-
-const focusables = (root: HTMLElement | null) =>
-  root ? [...root.querySelectorAll<HTMLElement>('input:not([disabled]), textarea:not([disabled]), button:not([disabled]), a[href]')] : [];

@@ -1,5 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
+import { ShowPasswordButton } from '@/components/ui/show-password-button';
 import { useForm } from 'react-hook-form';
 import { inviteAcceptFormSchema, PASSWORD_MIN_LENGTH, type InviteAcceptForm as Fields } from '@shared/schemas/admin-users';
 import { Banner } from '@/components/ui/banner';
@@ -43,9 +44,9 @@ export function AcceptInviteForm({ token, email, onAccepted }: { token: string; 
       <Field label="Type it again" error={errors.confirmPassword?.message}>
         <TextInput type={show ? 'text' : 'password'} autoComplete="new-password" {...register('confirmPassword')} />
       </Field>
-      <Button variant="quiet" className="-ml-3 px-3" aria-pressed={show} onClick={() => setShow((s) => !s)}>
+      <ShowPasswordButton shown={show} onToggle={() => setShow((s) => !s)}>
         Show passwords
-      </Button>
+      </ShowPasswordButton>
       <Button type="submit" size="lg" block disabled={accept.isPending}>
         {accept.isPending ? 'Setting your password…' : 'Set password and open my account'}
       </Button>

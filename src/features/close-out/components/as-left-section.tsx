@@ -1,23 +1,19 @@
-import { useFormContext, useWatch } from 'react-hook-form';
+import { useWatch } from 'react-hook-form';
 import { WAITS_FOR_CHOICES } from '@shared/record/record-wording';
 import { Field } from '@/components/ui/field';
 import { RadioCards } from '@/components/ui/radio-cards';
 import { SafetyNotice } from '@/components/ui/safety-notice';
 import { Textarea } from '@/components/ui/textarea';
 import { TextInput } from '@/components/ui/text-input';
-import { emptyAsAbsent, type CloseOutFields } from '../utils/close-out-values';
+import { Section } from '@/components/ui/section';
+import { useCloseOutForm } from '../hooks/use-close-out-form';
+import { emptyAsAbsent } from '../utils/close-out-values';
 
 /** How the press is left: back in production, or locked out and tagged until it can be repaired. */
 export function AsLeftSection() {
-  const {
-    register,
-    formState: { errors },
-  } = useFormContext<CloseOutFields>();
+  const { register, errors } = useCloseOutForm();
   return (
-    <section aria-labelledby="close-out-as-left" className="space-y-4">
-      <h2 id="close-out-as-left" className="text-2xl font-bold text-ink">
-        How the press is left
-      </h2>
+    <Section variant="form" title="How the press is left">
       <RadioCards
         legend="The press is"
         hint="Choose “left locked out” when the press cannot run production yet, for example while it waits for a board or a part."
@@ -28,24 +24,17 @@ export function AsLeftSection() {
         error={errors.asLeft?.message}
         registration={register('asLeft')}
       />
-    </section>
+    </Section>
   );
 }
 
 /** Why the press stays out of production and what it waits for; no return-to-service checks apply yet. */
 export function LockedOutSection() {
-  const {
-    register,
-    control,
-    formState: { errors },
-  } = useFormContext<CloseOutFields>();
+  const { register, control, errors } = useCloseOutForm();
   const waitsFor = useWatch({ control, name: 'lockedOut.waitsFor' });
   const e = errors.lockedOut;
   return (
-    <section aria-labelledby="close-out-locked-out" className="space-y-4">
-      <h2 id="close-out-locked-out" className="text-2xl font-bold text-ink">
-        Left locked out
-      </h2>
+    <Section variant="form" title="Left locked out">
       <SafetyNotice level="warning">
         Switch off control power and re-apply your lock and tag under the plant’s lockout procedure, and tag the press not fit for production
         before you leave it. Tell the plant’s responsible person that the press must not run until the work it waits for is done and the
@@ -65,6 +54,6 @@ export function LockedOutSection() {
           <TextInput autoComplete="off" {...register('lockedOut.waitsForDetail', { setValueAs: emptyAsAbsent })} />
         </Field>
       )}
-    </section>
+    </Section>
   );
 }

@@ -7,6 +7,7 @@ import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { applyServerErrors } from '@/lib/apply-server-errors';
+import { keepTabInside } from '@/lib/focus-trap';
 import { errorMessage, isApiError } from '@/lib/api-error';
 import { Textarea } from '@/components/ui/textarea';
 import { useReviewDecision } from '@/api/visit-review';
@@ -55,18 +56,7 @@ export function ReviewDecisionDialog({ visitId, reference, mode, onClose, onDone
 
   const onKeyDown = (event: KeyboardEvent) => {
     if (event.key === 'Escape' && !decision.isPending) onClose();
-    if (event.key !== 'Tab' || !dialogRef.current) return;
-    // Keep Tab inside the dialog: from the last control back to the first, and the other way.
-    const focusable = [...dialogRef.current.querySelectorAll<HTMLElement>('textarea, button:not([disabled])')];
-    const first = focusable[0];
-    const last = focusable.at(-1);
-    if (event.shiftKey && document.activeElement === first) {
-      event.preventDefault();
-      last?.focus();
-    } else if (!event.shiftKey && document.activeElement === last) {
-      event.preventDefault();
-      first?.focus();
-    }
+    keepTabInside(event, dialogRef.current);
   };
 
   const submit = handleSubmit((values) => {

@@ -1,5 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
+import { ShowPasswordButton } from '@/components/ui/show-password-button';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { signInSchema, type SignInInput } from '@shared/schemas/session';
@@ -58,9 +59,9 @@ export function SignInForm() {
       <Field label="Password" error={errors.password?.message}>
         <TextInput type={showPassword ? 'text' : 'password'} autoComplete="current-password" {...register('password')} />
       </Field>
-      <Button variant="quiet" className="-ml-3 px-3" aria-pressed={showPassword} onClick={() => setShowPassword((shown) => !shown)}>
+      <ShowPasswordButton shown={showPassword} onToggle={() => setShowPassword((shown) => !shown)}>
         Show password
-      </Button>
+      </ShowPasswordButton>
       <Button type="submit" size="lg" block disabled={busy}>
         {busy ? 'Signing in…' : 'Sign in'}
       </Button>
