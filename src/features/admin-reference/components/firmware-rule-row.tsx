@@ -2,6 +2,7 @@ import { get, type FieldErrors, type UseFormRegister } from 'react-hook-form';
 import type { FirmwareRulesDraftInput } from '@shared/schemas/admin-reference';
 import { Button } from '@/components/ui/button';
 import { FieldError } from '@/components/ui/field-error';
+import { CellCheckbox } from '@/components/ui/cell-checkbox';
 import { Select } from '@/components/ui/select';
 import { TextInput } from '@/components/ui/text-input';
 import { cn } from '@/lib/cn';
@@ -53,7 +54,7 @@ export function FirmwareRuleRow({ index, register, errors, editable, onRemove }:
       </td>
       {input('note', 'note')}
       <td className="p-1.5 text-center align-top">
-        <input type="checkbox" aria-label={`Rule ${index + 1}: invented demo rule`} className="h-6 w-6" {...register(`${base}.invented`)} />
+        <CellCheckbox label={`Rule ${index + 1}: invented demo rule`} registration={register(`${base}.invented`)} />
       </td>
       <td className={cn('p-1.5 align-top', !editable && 'hidden')}>
         <Button variant="quiet" onClick={onRemove} aria-label={`Remove rule ${index + 1}`}>

@@ -3,6 +3,7 @@ import { FIRMWARE_UNREADABLE, FIRMWARE_UNREADABLE_LABEL, FIRMWARE_VERSION_HINT, 
 import type { Step } from '@shared/schemas/procedure';
 import type { StepResultRecord, VisitDetail } from '@shared/schemas/visit-detail';
 import { Button } from '@/components/ui/button';
+import { CheckboxCard } from '@/components/ui/checkbox-card';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/text-input';
 import { cn } from '@/lib/cn';
@@ -59,10 +60,7 @@ export function FirmwareStepView({ visit, step, result, answer, editable }: Firm
       <Field label={label(key, fallback)} error={errors[key]}>
         <TextInput inputMode="decimal" spellCheck={false} maxLength={40} value={unreadable ? '' : value} disabled={!editable || unreadable} onChange={(e) => setValue(e.target.value)} />
       </Field>
-      <label className="flex min-h-12 items-center gap-3 text-lg">
-        <input type="checkbox" className="h-6 w-6 accent-accent" checked={unreadable} disabled={!editable} onChange={(e) => setUnreadable(e.target.checked)} />
-        {FIRMWARE_UNREADABLE_LABEL}
-      </label>
+      <CheckboxCard label={FIRMWARE_UNREADABLE_LABEL} checked={unreadable} disabled={!editable} onChange={(e) => setUnreadable(e.target.checked)} />
     </div>
   );
 

@@ -1,3 +1,4 @@
+import { RadioChips } from '@/components/ui/radio-chips';
 import type { ReactNode } from 'react';
 import type { StepInput } from '@shared/schemas/procedure';
 import type { BandSetRecord } from '@shared/schemas/visit-detail';
@@ -67,20 +68,12 @@ interface YesNoFieldProps {
   onChange: (value: 'yes' | 'no') => void;
 }
 
-/** A yes/no question as two large radio buttons; nothing is chosen until the technician answers. */
+const YES_NO = [
+  { value: 'yes', label: 'Yes' },
+  { value: 'no', label: 'No' },
+] as const;
+
+/** A yes/no question as two large radio chips; nothing is chosen until the technician answers. */
 export function YesNoField({ label, value, error, disabled, onChange }: YesNoFieldProps) {
-  return (
-    <fieldset className="space-y-2" aria-invalid={error ? true : undefined}>
-      <legend className="text-lg font-semibold text-ink">{label}</legend>
-      <div className="flex flex-wrap gap-3">
-        {(['yes', 'no'] as const).map((option) => (
-          <label key={option} className="flex min-h-touch cursor-pointer items-center gap-2 rounded-lg border-2 border-surface-edge bg-surface-raised px-4 text-lg text-ink has-[:checked]:border-accent">
-            <input type="radio" name={label} className="h-5 w-5" checked={value === option} disabled={disabled} onChange={() => onChange(option)} />
-            {option === 'yes' ? 'Yes' : 'No'}
-          </label>
-        ))}
-      </div>
-      {error && <p className="text-base font-medium text-verdict-out_of_band">{error}</p>}
-    </fieldset>
-  );
+  return <RadioChips legend={label} options={YES_NO} value={value} error={error} disabled={disabled} onChange={onChange} />;
 }
