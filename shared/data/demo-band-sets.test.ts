@@ -23,6 +23,6 @@ describe('DEMO_BAND_SETS', () => {
   });
 
   it('have one entry per generation key', () => {
-    expect(new Set(DEMO_BAND_SETS.map((s) => s.generationKey)).size).toBe(DEMO_BAND_SETS.length);
+    expect(new Set(DEMO_BAND_SETS.map((s) => s.generation)).size).toBe(DEMO_BAND_SETS.length);
   });
 });

@@ -9,7 +9,7 @@ const INVENTED = 'Invented demo values — not from any manufacturer. An admin r
  */
 export const DEMO_BAND_SETS: readonly BandSet[] = [
   {
-    generationKey: 'demo-gen-1',
+    generation: 'demo-gen-1',
     version: 2,
     values: {
       label: 'Demo generation 1 (invented)',
@@ -29,7 +29,7 @@ export const DEMO_BAND_SETS: readonly BandSet[] = [
     },
   },
   {
-    generationKey: 'demo-gen-2',
+    generation: 'demo-gen-2',
     version: 2,
     values: {
       label: 'Demo generation 2 (invented)',

@@ -7,19 +7,19 @@ import { TRADE_CANDIDATES } from './testing/trade-fact-band-sets';
 describe('inferGeneration', () => {
   it('picks the older generation from readings near 89 / 70 / 70 Ω with high confidence', () => {
     const result = inferGeneration({ rotor: 88.4, stator_1: 70.6, stator_2: 69.5 }, TRADE_CANDIDATES);
-    expect(result.best?.generationKey).toBe('older');
+    expect(result.best?.generation).toBe('older');
     expect(result.best!.confidence).toBeGreaterThan(0.99);
     expect(result.best!.fitsAllReadings).toBe(true);
   });
 
   it('picks the newer generation from readings near 36 / 90 / 90 Ω with high confidence', () => {
     const result = inferGeneration({ rotor: 36.3, stator_1: 91.2, stator_2: 89.1 }, TRADE_CANDIDATES);
-    expect(result.best?.generationKey).toBe('newer');
+    expect(result.best?.generation).toBe('newer');
     expect(result.best!.confidence).toBeGreaterThan(0.99);
   });
 
   it('can infer from the rotor alone, which differs most between the generations', () => {
-    expect(inferGeneration({ rotor: 37 }, TRADE_CANDIDATES).best?.generationKey).toBe('newer');
+    expect(inferGeneration({ rotor: 37 }, TRADE_CANDIDATES).best?.generation).toBe('newer');
   });
 
   it('is less sure from stators alone, whose nominals are closer (70 vs 90 Ω)', () => {
@@ -31,7 +31,7 @@ describe('inferGeneration', () => {
   it('declines to suggest a generation when no band set contains the readings (faulty sensor or cable)', () => {
     const result = inferGeneration({ rotor: 250, stator_1: 70, stator_2: 70 }, TRADE_CANDIDATES);
     expect(result.best).toBeNull();
-    expect(result.ranked[0]!.generationKey).toBe('older');
+    expect(result.ranked[0]!.generation).toBe('older');
     expect(result.reason).toContain('do not infer');
   });
 
@@ -51,15 +51,15 @@ describe('inferGeneration', () => {
     const warm = { rotor: 89 * 1.216, stator_1: 70 * 1.216, stator_2: 70 * 1.216 };
     expect(inferGeneration(warm, TRADE_CANDIDATES).best).toBeNull();
     const corrected = inferGeneration(warm, TRADE_CANDIDATES, 75);
-    expect(corrected.best?.generationKey).toBe('older');
+    expect(corrected.best?.generation).toBe('older');
     expect(corrected.ranked[0]!.distance).toBeLessThan(0.01);
   });
 
   it('works on the seeded (invented) demo band sets the same way', () => {
-    const candidates = DEMO_BAND_SETS.map((b) => ({ generationKey: b.generationKey, values: b.values }));
+    const candidates = DEMO_BAND_SETS.map((b) => ({ generation: b.generation, values: b.values }));
     const first = DEMO_BAND_SETS[0]!.values.windings;
     const result = inferGeneration({ rotor: first.rotor.nominal, stator_1: first.stator_1.nominal }, candidates);
-    expect(result.best?.generationKey).toBe(DEMO_BAND_SETS[0]!.generationKey);
+    expect(result.best?.generation).toBe(DEMO_BAND_SETS[0]!.generation);
   });
 });
 
@@ -68,8 +68,8 @@ describe('inferGeneration — the numbers behind the suggestion', () => {
   // confidence = exp(−Σz²/2) normalised over the candidates. Worked by hand below.
   it('rotor 89 Ω, older: z = 0; newer (36 Ω): z = (89/36 − 1)/0.2 = 7.361; distances 0 and 7.361', () => {
     const result = inferGeneration({ rotor: 89 }, TRADE_CANDIDATES);
-    const older = result.ranked.find((r) => r.generationKey === 'older')!;
-    const newer = result.ranked.find((r) => r.generationKey === 'newer')!;
+    const older = result.ranked.find((r) => r.generation === 'older')!;
+    const newer = result.ranked.find((r) => r.generation === 'newer')!;
     expect(older.distance).toBeCloseTo(0, 12);
     expect(newer.distance).toBeCloseTo((89 / 36 - 1) / 0.2, 9);
     expect(newer.fitsAllReadings).toBe(false);
@@ -81,7 +81,7 @@ describe('inferGeneration — the numbers behind the suggestion', () => {
     const zNew = (78 / 90 - 1) / 0.2;
     const result = inferGeneration({ stator_1: 78, stator_2: 78 }, TRADE_CANDIDATES);
     const expected = 1 / (1 + Math.exp(-(2 * zNew * zNew - 2 * zOld * zOld) / 2));
-    expect(result.ranked[0]!.generationKey).toBe('older');
+    expect(result.ranked[0]!.generation).toBe('older');
     expect(result.ranked[0]!.confidence).toBeCloseTo(expected, 12);
     expect(result.ranked[0]!.distance).toBeCloseTo(Math.sqrt((2 * zOld * zOld) / 2), 12);
     expect(result.ranked[1]!.distance).toBeCloseTo(Math.abs(zNew), 12);
@@ -89,7 +89,7 @@ describe('inferGeneration — the numbers behind the suggestion', () => {
   });
 
   it('a reading exactly at the near-edge limit still fits: rotor 106.8 Ω is +20 % of 89 Ω', () => {
-    expect(inferGeneration({ rotor: 89 * 1.2 }, TRADE_CANDIDATES).best?.generationKey).toBe('older');
+    expect(inferGeneration({ rotor: 89 * 1.2 }, TRADE_CANDIDATES).best?.generation).toBe('older');
   });
 
   it('ignores zero, negative and NaN readings, using the rest', () => {
@@ -108,8 +108,8 @@ describe('inferGeneration — the numbers behind the suggestion', () => {
 
   it('two identical candidates share the confidence equally', () => {
     const twin = [
-      { generationKey: 'b', values: { ...TRADE_CANDIDATES[0]!.values, label: 'B' } },
-      { generationKey: 'a', values: { ...TRADE_CANDIDATES[0]!.values, label: 'A' } },
+      { generation: 'b', values: { ...TRADE_CANDIDATES[0]!.values, label: 'B' } },
+      { generation: 'a', values: { ...TRADE_CANDIDATES[0]!.values, label: 'A' } },
     ];
     const result = inferGeneration({ rotor: 89 }, twin);
     expect(result.ranked.map((r) => r.confidence)).toEqual([0.5, 0.5]);
@@ -119,7 +119,7 @@ describe('inferGeneration — the numbers behind the suggestion', () => {
 describe('inferGeneration — the near-edge limit', () => {
   // Stator 84 Ω is (84 − 70) / 70 = 20 % above the older nominal: exactly its near-edge limit (computed).
   it('a reading exactly at a candidate\'s near-edge limit still fits it; just beyond does not', () => {
-    const older = (value: number) => inferGeneration({ stator_1: value }, TRADE_CANDIDATES).ranked.find((r) => r.generationKey === 'older')!;
+    const older = (value: number) => inferGeneration({ stator_1: value }, TRADE_CANDIDATES).ranked.find((r) => r.generation === 'older')!;
     expect(older(84).fitsAllReadings).toBe(true);
     expect(older(84.1).fitsAllReadings).toBe(false);
   });

@@ -4,12 +4,12 @@ import { correctCopperResistance } from './temperature-correction';
 import type { Celsius, Ohms } from './units';
 
 export interface GenerationCandidate {
-  generationKey: string;
+  generation: string;
   values: BandSetValues;
 }
 
 export interface GenerationScore {
-  generationKey: string;
+  generation: string;
   label: string;
   /** Share of the evidence among the candidates, 0–1. */
   confidence: number;
@@ -44,7 +44,7 @@ export function inferGeneration(
   if (circuits.length === 0 || candidates.length === 0) {
     return { best: null, ranked: [], reason: 'No usable resistance readings (or no band sets) to infer a generation from.' };
   }
-  const scored = candidates.map(({ generationKey, values }) => {
+  const scored = candidates.map(({ generation, values }) => {
     let sumSquares = 0;
     let fitsAllReadings = true;
     for (const circuit of circuits) {
@@ -56,7 +56,7 @@ export function inferGeneration(
       sumSquares += z * z;
       if (Math.abs(z) > 1) fitsAllReadings = false;
     }
-    return { generationKey, label: values.label, sumSquares, fitsAllReadings, distance: Math.sqrt(sumSquares / circuits.length) };
+    return { generation, label: values.label, sumSquares, fitsAllReadings, distance: Math.sqrt(sumSquares / circuits.length) };
   });
   // Subtract the smallest exponent first so far-off candidates do not underflow every weight to 0.
   const least = Math.min(...scored.map((s) => s.sumSquares));
@@ -64,7 +64,7 @@ export function inferGeneration(
   const total = weights.reduce((a, b) => a + b, 0);
   const ranked: GenerationScore[] = scored
     .map((s, i) => ({
-      generationKey: s.generationKey,
+      generation: s.generation,
       label: s.label,
       confidence: weights[i]! / total,
       fitsAllReadings: s.fitsAllReadings,

@@ -80,7 +80,7 @@ export const generationKeySchema = z
 
 /** A row of band_sets: one version of the values for one sensor generation. */
 export const bandSetSchema = z.object({
-  generationKey: generationKeySchema,
+  generation: generationKeySchema,
   version: z.number().int().positive(),
   values: bandSetValuesSchema,
 });

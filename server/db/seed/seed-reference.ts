@@ -26,8 +26,8 @@ export async function seedReference(sequelize: Sequelize): Promise<{ created: nu
     if (madeProcedure) created++;
     for (const b of DEMO_BAND_SETS) {
       const [, made] = await BandSetVersion.findOrCreate({
-        where: { generation: b.generationKey, version: b.version },
-        defaults: { generation: b.generationKey, version: b.version, label: b.values.label, bands: b.values, publishedAt: now, createdBy: null },
+        where: { generation: b.generation, version: b.version },
+        defaults: { generation: b.generation, version: b.version, label: b.values.label, bands: b.values, publishedAt: now, createdBy: null },
         transaction,
       });
       if (made) created++;

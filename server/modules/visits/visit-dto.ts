@@ -100,7 +100,7 @@ export function visitDetail(ctx: VisitContext, traversal: Traversal, extra: { pa
     likelyCauses: likelyCauses(ctx, traversal),
     generationSuggestion: generationSuggestion(
       ctx,
-      extra.publishedBandSets.map((b) => ({ generationKey: b.generation, values: b.bands })),
+      extra.publishedBandSets.map((b) => ({ generation: b.generation, values: b.bands })),
     ),
     closeOut: {
       causeCategory: v.causeCategory,

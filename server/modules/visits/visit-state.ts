@@ -56,7 +56,7 @@ export function likelyCauses(ctx: VisitContext, traversal: Traversal): CauseRank
 }
 
 /** When the nameplate gave no generation, suggest one from the de-energized readings so far. */
-export function generationSuggestion(ctx: VisitContext, candidates: { generationKey: string; values: NonNullable<ReturnType<typeof bandValues>> }[]): GenerationInference | null {
+export function generationSuggestion(ctx: VisitContext, candidates: { generation: string; values: NonNullable<ReturnType<typeof bandValues>> }[]): GenerationInference | null {
   if (ctx.bandSet) return null;
   const values: Partial<Record<Circuit, number>> = {};
   for (const r of currentReadings(ctx)) {

@@ -33,6 +33,6 @@ export const OLDER_GENERATION = bands('Older generation (trade check values)', 8
 export const NEWER_GENERATION = bands('Newer generation (trade check values)', 36, 90);
 
 export const TRADE_CANDIDATES: GenerationCandidate[] = [
-  { generationKey: 'older', values: OLDER_GENERATION },
-  { generationKey: 'newer', values: NEWER_GENERATION },
+  { generation: 'older', values: OLDER_GENERATION },
+  { generation: 'newer', values: NEWER_GENERATION },
 ];

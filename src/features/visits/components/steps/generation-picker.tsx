@@ -38,7 +38,7 @@ export function GenerationPicker({ suggestion, bandSets, value, onChange, disabl
           {bandSets.map((b) => (
             <option key={b.generation} value={b.generation}>
               {b.label}
-              {best?.generationKey === b.generation ? ' (suggested)' : ''}
+              {best?.generation === b.generation ? ' (suggested)' : ''}
             </option>
           ))}
         </Select>

@@ -54,7 +54,7 @@ export function MeasureStepView({ visit, step, result, answer, editable, draftKe
   };
   const [conditionsDraft, setConditionsDraft] = useState(() => draftFromReading(stored.find((r) => r.quantity === 'resistance')));
   const [resaveRound, setResaveRound] = useState(0);
-  const [generation, setGeneration] = useState(visit.generationSuggestion?.best?.generationKey ?? '');
+  const [generation, setGeneration] = useState(visit.generationSuggestion?.best?.generation ?? '');
   const questions = (step.inputs ?? []).filter((i) => i.type === 'yes_no');
   const [answers, setAnswers] = useState<Record<string, string>>(() => answerInputs(result));
   const [missing, setMissing] = useState<Record<string, string>>({});
