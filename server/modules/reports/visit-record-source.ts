@@ -5,7 +5,7 @@ import { Attachment } from '../attachments/attachments.model';
 import { User } from '../users/users.model';
 import { loadVisitContext } from '../visits/visit-context.service';
 import { PartUsed } from '../visits/visit-work.model';
-import { visitIncludes } from '../visits/visits.service';
+import { readingDto, visitIncludes } from '../visits/visits.service';
 import { Visit } from '../visits/visits.model';
 import type { ReportIssue } from './report-issues.model';
 
@@ -75,20 +75,7 @@ export async function readVisitRecordSource(visitId: number, options: RecordOpti
       createdBy: r.createdBy,
       supersededAt: iso(r.supersededAt),
     })),
-    readings: ctx.readings.map((r) => ({
-      id: r.id,
-      stepId: r.stepId,
-      quantity: r.quantity,
-      circuit: r.circuit,
-      position: r.position,
-      entered: r.entered,
-      windingTemperatureC: r.windingTemperatureC,
-      cable: r.cable,
-      verdict: r.verdict,
-      reason: r.reason,
-      judgement: r.judgement,
-      supersededAt: iso(r.supersededAt),
-    })),
+    readings: ctx.readings.map(readingDto),
     parts: parts.map((p) => ({ id: p.id, partNumber: p.partNumber, description: p.description, quantity: p.quantity, serialRemoved: p.serialRemoved, serialFitted: p.serialFitted })),
     attachments: attachments.map((a) => ({ id: a.id, kind: a.kind, caption: a.caption, stepId: a.stepId, hasThumb: a.thumbKey !== null })),
     people: Object.fromEntries(people.map((u) => [u.id, u.name])),

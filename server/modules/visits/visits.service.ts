@@ -13,6 +13,9 @@ import { User } from '../users/users.model';
 import { loadAccessibleVisit } from './visit-access.service';
 import { latestPublishedBandSet, loadVisitContext } from './visit-context.service';
 import { visitDetail, visitSummary, type VisitDetailDto } from './visit-dto';
+
+// The reports module builds the visit record from the same reading rows and shape.
+export { readingDto } from './visit-dto';
 import { traverse } from './visit-state';
 import { PartUsed } from './visit-work.model';
 import { Visit } from './visits.model';

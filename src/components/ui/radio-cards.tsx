@@ -15,7 +15,7 @@ export interface RadioCardOption {
 interface RadioCardsProps {
   legend: string;
   hint?: ReactNode;
-  options: RadioCardOption[];
+  options: ReadonlyArray<RadioCardOption>;
   error?: string;
   registration: UseFormRegisterReturn;
   columns?: 1 | 2;

@@ -10,6 +10,29 @@ import { CheckboxCard } from '@/components/ui/checkbox-card';
 import { RadioCards } from '@/components/ui/radio-cards';
 import { SafetyDistanceNote } from './safety-distance-note';
 
+/** The two safeguard questions: where the presence-sensing device and the two-hand stations stand. */
+const SAFEGUARD_QUESTIONS = [
+  {
+    name: 'presenceSensingDistanceOk',
+    legend: 'Presence-sensing device distance',
+    hint: 'If a device sits closer than its safety distance, do not return the press to production: have the mounting corrected first.',
+    options: [
+      { value: 'yes', label: 'At or beyond its safety distance' },
+      { value: 'not_fitted', label: 'No presence-sensing device fitted' },
+    ],
+  },
+  {
+    name: 'twoHandDevice',
+    legend: 'Two-hand stations',
+    hint: 'A two-hand control or trip closer than its safety distance lets a hand reach the die before the slide stops: have it moved first.',
+    options: [
+      { value: 'control', label: 'Two-hand control fitted' },
+      { value: 'trip', label: 'Two-hand trip fitted' },
+      { value: 'not_fitted', label: 'Neither fitted' },
+    ],
+  },
+] as const;
+
 /** The post-repair checks that must pass before the press goes back to production. */
 export function ReturnToServiceSection({ needs }: { needs: ReturnToServiceNeeds }) {
   const { register, control, errors } = useCloseOutForm();
@@ -59,27 +82,9 @@ export function ReturnToServiceSection({ needs }: { needs: ReturnToServiceNeeds 
       >
         <TextInput inputMode="decimal" autoComplete="off" className="max-w-[12rem]" {...register('returnToService.stoppingTimeMs', { setValueAs: emptyAsAbsent })} />
       </Field>
-      <RadioCards
-        legend="Presence-sensing device distance"
-        hint="If a device sits closer than its safety distance, do not return the press to production: have the mounting corrected first."
-        options={[
-          { value: 'yes', label: 'At or beyond its safety distance' },
-          { value: 'not_fitted', label: 'No presence-sensing device fitted' },
-        ]}
-        error={rts?.presenceSensingDistanceOk?.message}
-        registration={register('returnToService.presenceSensingDistanceOk')}
-      />
-      <RadioCards
-        legend="Two-hand stations"
-        hint="A two-hand control or trip closer than its safety distance lets a hand reach the die before the slide stops: have it moved first."
-        options={[
-          { value: 'control', label: 'Two-hand control fitted' },
-          { value: 'trip', label: 'Two-hand trip fitted' },
-          { value: 'not_fitted', label: 'Neither fitted' },
-        ]}
-        error={rts?.twoHandDevice?.message}
-        registration={register('returnToService.twoHandDevice')}
-      />
+      {SAFEGUARD_QUESTIONS.map((q) => (
+        <RadioCards key={q.name} legend={q.legend} hint={q.hint} options={q.options} error={rts?.[q.name]?.message} registration={register(`returnToService.${q.name}`)} />
+      ))}
       {twoHand === 'trip' && (
         <div className="grid gap-4 sm:grid-cols-2">
           <Field label="Strokes per minute" hint="The press’s single-stroke rate, e.g. 40." error={rts?.strokesPerMinute?.message}>
